@@ -1,0 +1,7 @@
+/** @hexloom/contracts: zod schemas and types shared by server, web and CLI. */
+export * from './roles.js';
+export * from './user.js';
+export * from './team.js';
+export * from './errors.js';
+export * from './health.js';
+export * from './version.js';
