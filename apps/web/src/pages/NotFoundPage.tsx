@@ -1,0 +1,13 @@
+// Any unknown path.
+import { HexloomLogo } from '../modules/brand/components/HexloomLogo.js';
+import { NotFoundState } from '../modules/core/components/NotFoundState.js';
+
+/** The 404 page, outside the signed-in frame so it works for everyone. */
+export function NotFoundPage() {
+  return (
+    <main className="hx-page" style={{ textAlign: 'center' }}>
+      <HexloomLogo sizePx={48} gapColour="var(--hx-bg)" title="Hexloom logo" />
+      <NotFoundState />
+    </main>
+  );
+}
