@@ -5,3 +5,4 @@ export * from './team.js';
 export * from './errors.js';
 export * from './health.js';
 export * from './version.js';
+export * from './mesh/index.js';

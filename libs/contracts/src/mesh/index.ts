@@ -1,0 +1,3 @@
+/** File formats of the mesh engine: mesh definitions and configurations. */
+export * from './mesh-definition.js';
+export * from './configuration.js';
