@@ -9,6 +9,7 @@ export default defineConfig({
     root: import.meta.dirname,
     include: ['src/**/*.test.{ts,tsx}'],
     environment: 'jsdom',
+    setupFiles: ['./src/test/setup.ts'],
     passWithNoTests: false,
   },
 });

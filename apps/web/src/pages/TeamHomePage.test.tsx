@@ -1,0 +1,40 @@
+// The root redirect and the team home: first team, its name, the user's role and what to do next.
+import { screen, within } from '@testing-library/react';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { DEMO_TEAM_ID, demoMe } from '../test/demoTeam.js';
+import { mockApi } from '../test/mockApi.js';
+import { renderApp } from '../test/renderApp.js';
+
+afterEach(() => vi.unstubAllGlobals());
+
+describe('TeamHomePage', () => {
+  it('opens the first team from / and shows its name, the role and the next steps without buttons', async () => {
+    mockApi({ 'GET /api/me': { body: demoMe('noor', 'designer') } });
+    const { router } = renderApp('/');
+    const home = await screen.findByTestId('team-home');
+    expect(router.state.location.pathname).toBe('/t/kestrel-vale');
+    expect(within(home).getByRole('heading', { level: 1 }).textContent).toBe('Kestrel Vale RF Photonics');
+    expect(within(home).getByTestId('role-tag').textContent).toBe('Designer');
+    expect(home.textContent).toContain('Describe the chip');
+    expect(home.textContent).toContain('next release');
+    expect(within(home).queryAllByRole('button')).toHaveLength(0);
+    expect(screen.getByTestId('nav-members').getAttribute('href')).toBe('/t/kestrel-vale/members');
+  });
+
+  it('shows the team switcher only when the user is in several teams', async () => {
+    const me = demoMe('ilse', 'owner');
+    me.teams.push({ id: DEMO_TEAM_ID.replace('5b0c', '6c1d'), slug: 'harrow-bench', name: 'Harrow Bench Group', role: 'viewer' });
+    mockApi({ 'GET /api/me': { body: me } });
+    renderApp('/t/harrow-bench');
+    await screen.findByTestId('team-home');
+    const switcher = screen.getByRole('combobox', { name: 'Switch team' }) as HTMLSelectElement;
+    expect(switcher.value).toBe('harrow-bench');
+    expect(Array.from(switcher.options).map((o) => o.value)).toEqual(['kestrel-vale', 'harrow-bench']);
+  });
+
+  it('answers an unknown path with the not-found page', async () => {
+    mockApi({});
+    renderApp('/no/such/page');
+    expect((await screen.findByTestId('not-found')).textContent).toContain('Page not found');
+  });
+});
