@@ -1,0 +1,59 @@
+/** createHexloomApp: database, migrations, seed, middleware, OpenAPI; returns an initialised app. */
+import type { INestApplication, LogLevel } from '@nestjs/common';
+import { NestFactory } from '@nestjs/core';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import cookieParser from 'cookie-parser';
+import helmet from 'helmet';
+import { AppModule } from './app.module.js';
+import { ApiExceptionFilter } from './common/api-exception.filter.js';
+import type { HexloomOptions } from './common/hexloom-options.js';
+import { resolveOptions } from './common/resolve-options.js';
+import { setupOpenApi } from './common/setup-open-api.js';
+import { openDatabase } from './db/migrate.js';
+import { seedDemo } from './db/seed.js';
+import { serveWebApp } from './web/serve-web-app.js';
+
+/** Options of createHexloomApp; `logLevels` defaults to errors and warnings only. */
+export type CreateHexloomAppOptions = HexloomOptions & { logLevels?: LogLevel[] };
+
+/**
+ * Opens (and migrates) the database, seeds the demo when asked, and returns an initialised,
+ * not yet listening Nest application. Close it with `app.close()` (closes the database too).
+ */
+export async function createHexloomApp(options: CreateHexloomAppOptions): Promise<INestApplication> {
+  const resolved = resolveOptions(options);
+  const database = await openDatabase(resolved.dataDir);
+  try {
+    if (resolved.seedDemo) await seedDemo(database.db);
+    const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(resolved, database), {
+      logger: options.logLevels ?? ['error', 'warn'],
+      abortOnError: false,
+    });
+    app.setGlobalPrefix('api');
+    app.useGlobalFilters(new ApiExceptionFilter());
+    app.disable('x-powered-by');
+    app.use(
+      helmet({
+        contentSecurityPolicy: {
+          directives: {
+            defaultSrc: ["'self'"],
+            scriptSrc: ["'self'"],
+            // The local sign-in page and the API docs page carry inline styles.
+            styleSrc: ["'self'", "'unsafe-inline'"],
+            imgSrc: ["'self'", 'data:', 'https://avatars.githubusercontent.com'],
+            formAction: ["'self'", resolved.publicUrl],
+            upgradeInsecureRequests: resolved.cookieSecure ? [] : null,
+          },
+        },
+      }),
+    );
+    app.use(cookieParser(resolved.sessionSecret));
+    setupOpenApi(app);
+    if (resolved.webDistDir) serveWebApp(app, resolved.webDistDir);
+    await app.init();
+    return app;
+  } catch (error) {
+    await database.client.close();
+    throw error;
+  }
+}

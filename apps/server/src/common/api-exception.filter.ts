@@ -1,0 +1,58 @@
+/** The single exception filter: every error becomes the JSON ApiError shape. */
+import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
+import type { ApiError } from '@hexloom/contracts';
+import type { Response } from 'express';
+import { DomainError, type DomainErrorKind } from './domain-error.js';
+
+const STATUS_OF_KIND: Record<DomainErrorKind, number> = {
+  invalid: HttpStatus.BAD_REQUEST,
+  unauthorized: HttpStatus.UNAUTHORIZED,
+  conflict: HttpStatus.CONFLICT,
+};
+
+const REASON: Record<number, string> = {
+  400: 'Bad Request',
+  401: 'Unauthorized',
+  403: 'Forbidden',
+  404: 'Not Found',
+  409: 'Conflict',
+  500: 'Internal Server Error',
+};
+
+/** Maps domain errors by kind, Nest HTTP exceptions by status, anything else to a logged 500. */
+@Catch()
+export class ApiExceptionFilter implements ExceptionFilter {
+  private readonly logger = new Logger('ApiExceptionFilter');
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    const res = host.switchToHttp().getResponse<Response>();
+    const body = this.toApiError(exception);
+    if (res.headersSent) return;
+    res.status(body.statusCode).json(body);
+  }
+
+  private toApiError(exception: unknown): ApiError {
+    if (exception instanceof DomainError) {
+      const statusCode = STATUS_OF_KIND[exception.kind];
+      return {
+        statusCode,
+        error: REASON[statusCode] ?? 'Error',
+        message: exception.message,
+        ...(exception.issues ? { issues: exception.issues } : {}),
+      };
+    }
+    if (exception instanceof HttpException) {
+      const statusCode = exception.getStatus();
+      const response = exception.getResponse();
+      const message =
+        typeof response === 'string'
+          ? response
+          : typeof (response as { message?: unknown }).message === 'string'
+            ? (response as { message: string }).message
+            : exception.message;
+      return { statusCode, error: REASON[statusCode] ?? exception.name, message };
+    }
+    this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
+    return { statusCode: 500, error: REASON[500] ?? 'Error', message: 'Internal server error' };
+  }
+}

@@ -1,0 +1,19 @@
+/** Base class of domain errors; the one exception filter maps their kind to an HTTP status. */
+
+/** What went wrong, independent of HTTP. */
+export type DomainErrorKind = 'invalid' | 'conflict' | 'unauthorized';
+
+/** One offending field of a rejected input. */
+export type DomainIssue = { path: string; message: string };
+
+/** A failure the client can fix; `name` is stable and `message` names the bad value. */
+export abstract class DomainError extends Error {
+  abstract readonly kind: DomainErrorKind;
+  /** Offending fields, when the error is about specific inputs. */
+  readonly issues: DomainIssue[] | undefined;
+
+  constructor(message: string, issues?: DomainIssue[]) {
+    super(message);
+    this.issues = issues;
+  }
+}

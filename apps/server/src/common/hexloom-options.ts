@@ -1,0 +1,35 @@
+/** Options of createHexloomApp and the token they are provided under. */
+
+/** GitHub OAuth app credentials; when absent the built-in fake identity provider is used. */
+export type GithubCredentials = { clientId: string; clientSecret: string };
+
+/** Everything a Hexloom server instance needs to know at start. */
+export type HexloomOptions = {
+  /** Folder of the PGlite database, or `'memory'` for a throw-away in-memory one. */
+  dataDir: string | 'memory';
+  /** Insert the invented demo team and accounts (idempotent). */
+  seedDemo: boolean;
+  /** Built web app to serve with SPA fallback; skipped when absent or missing on disk. */
+  webDistDir?: string;
+  /** Public origin used in OAuth redirects, e.g. `http://localhost:3000`. */
+  publicUrl?: string;
+  /** Secret signing cookies; a random one per process when absent. */
+  sessionSecret?: string;
+  github?: GithubCredentials;
+  /** Force the Secure cookie attribute (defaults to publicUrl being https). */
+  cookieSecure?: boolean;
+};
+
+/** Options after defaults were applied. */
+export type ResolvedOptions = {
+  dataDir: string;
+  seedDemo: boolean;
+  webDistDir: string | null;
+  publicUrl: string;
+  sessionSecret: string;
+  github: GithubCredentials | null;
+  cookieSecure: boolean;
+};
+
+/** Injection token of the ResolvedOptions. */
+export const HEXLOOM_OPTIONS = Symbol('hexloom:options');

@@ -1,0 +1,12 @@
+/** The Drizzle database handle type and its injection token. */
+import type { PgliteDatabase } from 'drizzle-orm/pglite';
+import type * as schema from './schema/index.js';
+
+/** The typed Drizzle handle over PGlite used by every repository and service. */
+export type Database = PgliteDatabase<typeof schema>;
+
+/** Injection token under which the Drizzle handle is provided. */
+export const DATABASE = Symbol('hexloom:database');
+
+/** A Drizzle handle or an open transaction on it; services accept either so callers can compose. */
+export type DbExecutor = Database | Parameters<Parameters<Database['transaction']>[0]>[0];
