@@ -1,3 +1,24 @@
 /** @hexloom/synth: filter and delay synthesis for hexagonal meshes (pure, portable). */
-export { lowpassPrototype, SynthInputError } from './lowpass-prototype.js';
+export { SynthInputError } from './synth-input-error.js';
+export { lowpassPrototype } from './lowpass-prototype.js';
 export type { PrototypeInput, PrototypeKind } from './lowpass-prototype.js';
+export {
+  ringAddDropPower,
+  ringAllPassDelayAtResonance,
+  ringAllPassMinimum,
+  ringAllPassPower,
+  ringFinesse,
+  ringWidthFraction,
+} from './ring-equations.js';
+export { describeAllPassRing, designAddDropRing, designAllPassRing } from './ring-design.js';
+export type { AddDropDesign, RingCouplingRegime, RingDesign, RingDesignInput, RingTarget } from './ring-design.js';
+export { designCoupledRingBandpass } from './coupled-ring-design.js';
+export type { CoupledRingDesign, CoupledRingInput } from './coupled-ring-design.js';
+export type { Complex } from './complex.js';
+export { latticeResponse } from './lattice-response.js';
+export type { LatticeParameters, LatticePolynomials } from './lattice-response.js';
+export { complementarityError, complementaryPolynomial } from './spectral-factor.js';
+export { peelLattice } from './layer-peeling.js';
+export { besselI0, designFirTarget, kaiserBeta } from './fir-window-design.js';
+export type { FirBand, FirDesignInput } from './fir-window-design.js';
+export { polynomialRoots } from './polynomial-roots.js';

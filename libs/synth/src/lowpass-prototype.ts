@@ -1,5 +1,7 @@
 /** Low-pass prototype element values (g-values) for Butterworth and Chebyshev responses. */
 
+import { SynthInputError } from './synth-input-error.js';
+
 export type PrototypeKind = 'butterworth' | 'chebyshev';
 
 export type PrototypeInput = {
@@ -10,10 +12,6 @@ export type PrototypeInput = {
   rippleDb?: number;
 };
 
-/** Error for a prototype request that has no solution. */
-export class SynthInputError extends Error {
-  override readonly name = 'SynthInputError';
-}
 
 /**
  * Returns g_0 .. g_{n+1} of the doubly terminated low-pass prototype (g_0 = 1).
