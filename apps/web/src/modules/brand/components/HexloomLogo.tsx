@@ -1,14 +1,14 @@
-// The Hexloom mark: a hexagon woven from three strands that each turn inwards towards an amber centre.
+// The Hexloom mark: a hexagon woven from three strands that fold inwards into a triangle around an amber centre.
 
-/** Strand paths in a 64 x 64 box: each runs along two hexagon edges, then turns towards the centre. */
+/** Strand paths in a 64 x 64 box: each runs along two hexagon edges, then folds back across the cell. */
 const STRANDS = [
-  'M11.2 20 L32 8 L52.8 20 L37.8 28.6',
-  'M52.8 20 L52.8 44 L32 56 L32 38.7',
-  'M32 56 L11.2 44 L11.2 20 L26.2 28.6',
+  'M11.2 20 L32 8 L52.8 20 L37.8 45.9',
+  'M52.8 20 L52.8 44 L32 56 L17 30.1',
+  'M32 56 L11.2 44 L11.2 20 L41.1 20',
 ] as const;
 /** The first half-edge of strand one, drawn again last so every strand passes over its neighbour once. */
 const WEAVE_CLOSER = 'M11.2 20 L21.6 14';
-const STRAND_COLOURS = ['var(--hx-loom-700)', 'var(--hx-loom-500)', 'var(--hx-loom-300)'] as const;
+const STRAND_COLOURS = ['var(--hx-logo-1)', 'var(--hx-logo-2)', 'var(--hx-logo-3)'] as const;
 
 export type HexloomLogoProps = {
   /** Width and height in CSS pixels. */

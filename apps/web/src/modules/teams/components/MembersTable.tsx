@@ -72,7 +72,7 @@ export function MembersTable({ members, canManage, busyUserId, onChangeRole, onR
     <Column key="joined" name="Joined" cellRenderer={text((m) => formatDate(m.joinedAt), true)} />,
   ];
   if (canManage) columns.push(<Column key="actions" name="" cellRenderer={actionCell} />);
-  const widths = canManage ? [200, 120, 250, 140, 120, 110] : [220, 140, 290, 140, 150];
+  const widths = canManage ? [210, 130, 290, 150, 140, 128] : [240, 150, 330, 160, 168];
 
   return (
     <div
