@@ -6,3 +6,4 @@ export * from './errors.js';
 export * from './health.js';
 export * from './version.js';
 export * from './mesh/index.js';
+export * from './synth/index.js';

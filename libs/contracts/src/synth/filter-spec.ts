@@ -1,0 +1,136 @@
+/** The specification file format: what a designer asks for, with its mask (see docs/formats.md). */
+import { z } from 'zod';
+import { cellIdSchema, portIdSchema } from '../mesh/mesh-definition.js';
+import { maskSchema } from './mask.js';
+
+/** Version of the specification file format. */
+export const SPEC_SCHEMA_VERSION = 1;
+
+const finite = z.number().finite();
+const positive = finite.positive();
+
+const placement = {
+  /** Cells the circuit must stay inside (optional). */
+  region: z.array(cellIdSchema).max(4096).optional(),
+};
+
+const ringSize = z
+  .union([z.object({ perimeterUnits: z.number().int().min(6).max(400) }), z.object({ fsrHz: positive }), z.object({ free: z.literal(true) })])
+  .default({ free: true });
+
+export const delayLineSpecSchema = z.object({
+  kind: z.literal('delay-line'),
+  from: portIdSchema,
+  to: portIdSchema,
+  delay: z.union([z.object({ ps: positive }), z.object({ units: z.number().int().positive() })]),
+  tolerancePs: finite.min(0).default(0),
+  ...placement,
+});
+
+export const ttdSetSpecSchema = z.object({
+  kind: z.literal('ttd-set'),
+  from: portIdSchema,
+  outputs: z.array(portIdSchema).min(2).max(32),
+  /** Delay step between consecutive outputs, ps. */
+  stepPs: positive,
+  /** Extra common delay added to every output, ps (default: as short as routing allows). */
+  basePs: finite.min(0).optional(),
+  tolerancePs: finite.min(0).default(0),
+  ...placement,
+});
+
+export const ringNotchSpecSchema = z.object({
+  kind: z.literal('ring-notch'),
+  from: portIdSchema,
+  to: portIdSchema,
+  centreOffsetHz: finite,
+  target: z.union([
+    z.object({ notchDepthDb: positive, regime: z.enum(['under', 'over']).default('under') }),
+    z.object({ fwhmHz: positive }),
+    z.object({ critical: z.literal(true) }),
+  ]),
+  ring: ringSize,
+  ...placement,
+});
+
+export const addDropSpecSchema = z.object({
+  kind: z.literal('add-drop'),
+  from: portIdSchema,
+  through: portIdSchema,
+  drop: portIdSchema,
+  centreOffsetHz: finite,
+  bandwidthHz: positive,
+  ring: ringSize,
+  ...placement,
+});
+
+export const coupledRingSpecSchema = z.object({
+  kind: z.literal('coupled-ring-bandpass'),
+  from: portIdSchema,
+  to: portIdSchema,
+  response: z.enum(['butterworth', 'chebyshev']),
+  order: z.number().int().min(1).max(8),
+  rippleDb: positive.max(3).optional(),
+  bandwidthHz: positive,
+  centreOffsetHz: finite,
+  ...placement,
+});
+
+export const latticeSpecSchema = z.object({
+  kind: z.literal('mzi-lattice'),
+  from: portIdSchema,
+  to: portIdSchema,
+  band: z.enum(['band-pass', 'band-stop', 'half-band', 'polynomial']),
+  order: z.number().int().min(1).max(16),
+  /** Arm length difference of each stage, units (even: the lattice is bipartite). */
+  armDifferenceUnits: z.number().int().min(2).max(40).multipleOf(2).default(2),
+  centreOffsetHz: finite.default(0),
+  widthHz: positive.optional(),
+  rejectionDb: positive.default(30),
+  /** For `polynomial`: coefficients of A(z), real and imaginary parts. */
+  coefficients: z.array(z.object({ re: finite, im: finite.default(0) })).max(17).optional(),
+  ...placement,
+});
+
+export const transversalSpecSchema = z.object({
+  kind: z.literal('transversal'),
+  from: portIdSchema,
+  to: portIdSchema,
+  /** Tap weights (field amplitudes, relative); tap k is delayed by k * tapDelayUnits. */
+  taps: z.array(finite).min(2).max(16),
+  tapDelayUnits: z.number().int().min(2).max(100).multipleOf(2),
+  ...placement,
+});
+
+export const allPassEqualiserSpecSchema = z.object({
+  kind: z.literal('allpass-equaliser'),
+  from: portIdSchema,
+  to: portIdSchema,
+  band: z.object({ fromHz: finite, toHz: finite }),
+  target: z.union([z.object({ delayPs: positive }), z.object({ slopePsPerGHz: finite })]),
+  stages: z.number().int().min(1).max(6),
+  ...placement,
+});
+
+/** Every kind of specification. */
+export const filterSpecBodySchema = z.discriminatedUnion('kind', [
+  delayLineSpecSchema,
+  ttdSetSpecSchema,
+  ringNotchSpecSchema,
+  addDropSpecSchema,
+  coupledRingSpecSchema,
+  latticeSpecSchema,
+  transversalSpecSchema,
+  allPassEqualiserSpecSchema,
+]);
+
+/** A specification file: a named request with its mask. */
+export const filterSpecSchema = z.object({
+  schemaVersion: z.literal(SPEC_SCHEMA_VERSION),
+  name: z.string().min(1).max(120),
+  spec: filterSpecBodySchema,
+  mask: maskSchema.default({ regions: [] }),
+});
+export type FilterSpec = z.infer<typeof filterSpecSchema>;
+export type FilterSpecBody = z.infer<typeof filterSpecBodySchema>;
+export type FilterSpecKind = FilterSpecBody['kind'];

@@ -1,0 +1,3 @@
+/** File formats of synthesis: specifications and their masks. */
+export * from './mask.js';
+export * from './filter-spec.js';
