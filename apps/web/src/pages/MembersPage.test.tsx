@@ -78,4 +78,27 @@ describe('MembersPage', () => {
     await waitFor(() => expect(calls.some((c) => c.key.startsWith('POST'))).toBe(true));
     expect(calls.find((c) => c.key.startsWith('POST'))?.body).toEqual({ email: 'wen@kestrel-vale.example', role: 'designer' });
   });
+
+  it('removes a member only after the owner confirms, then reloads the list', async () => {
+    const dario = demoMembers[2];
+    let removed = false;
+    const calls = mockApi({
+      'GET /api/me': { body: demoMe('ilse', 'owner') },
+      [MEMBERS]: () => ({ body: removed ? demoMembers.filter((m) => m.login !== 'dario') : demoMembers }),
+      [INVITATIONS]: { body: [] },
+      [`DELETE /api/teams/${DEMO_TEAM_ID}/members/${dario?.userId}`]: () => {
+        removed = true;
+        return { status: 204 };
+      },
+    });
+    renderApp('/t/kestrel-vale/members');
+    fireEvent.click(await screen.findByTestId('remove-member-dario'));
+    expect(calls.some((c) => c.key.startsWith('DELETE'))).toBe(false);
+    const dialog = await screen.findByRole('alertdialog');
+    expect(dialog.textContent).toContain('Dario Fennimore');
+    fireEvent.click(within(dialog).getByRole('button', { name: 'Remove' }));
+    const table = screen.getByTestId('members-table');
+    await waitFor(() => expect(within(table).queryByText('Dario Fennimore')).toBeNull());
+    expect(calls.filter((c) => c.key.startsWith('DELETE'))).toHaveLength(1);
+  });
 });
