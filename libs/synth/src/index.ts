@@ -22,3 +22,8 @@ export { peelLattice } from './layer-peeling.js';
 export { besselI0, designFirTarget, kaiserBeta } from './fir-window-design.js';
 export type { FirBand, FirDesignInput } from './fir-window-design.js';
 export { polynomialRoots } from './polynomial-roots.js';
+export type { FrequencyRange, MaskRegion, SampledResponse } from './mask-types.js';
+export { checkMask } from './check-mask.js';
+export type { MaskCheck, MaskReport } from './check-mask.js';
+export { responseFigures } from './response-figures.js';
+export type { ResponseFigures } from './response-figures.js';
