@@ -33,19 +33,19 @@ export type GateTransferInput = GatePerturbation & {
 };
 
 /**
- * Splitting-angle error of the first coupler that gives the stated extinction in bar and cross:
- * epsilon = asin(10^(-ER/20)).
+ * Splitting-angle error of the first coupler that gives the stated extinction ratio (wanted over unwanted
+ * output power) in bar and cross: epsilon = atan(10^(-ER/20)).
  * With couplers of angles pi/4 + e1 and pi/4 + e2 the MZI leaks sin^2(e2 - e1) of the power in bar
  * and sin^2(e1 + e2) in cross (Madsen & Zhao, Optical Filter Design and Analysis, 1999, ch. 3, MZI with
  * non-ideal couplers); putting the whole imbalance on the first coupler (e2 = 0) makes both leakages
- * equal to sin^2(epsilon) = 10^(-ER/10).
+ * equal to sin^2(epsilon), and the ratio to the wanted output tan^2(epsilon) = 10^(-ER/10).
  */
 export function couplerImbalanceRad(extinctionDb: number): number {
   if (Number.isNaN(extinctionDb) || extinctionDb <= 0) {
     throw new SolverInputError(`solver: extinctionDb must be a positive number of dB, got ${extinctionDb}`);
   }
   if (extinctionDb === Infinity) return 0;
-  return Math.asin(10 ** (-extinctionDb / 20));
+  return Math.atan(10 ** (-extinctionDb / 20));
 }
 
 /** Internal phase theta (radians, in [0, pi]) that gives power cross-coupling kappa = cos^2(theta/2). */
