@@ -13,7 +13,7 @@ import { type LoginQuery, loginQuerySchema, type OAuthStateCookie } from './auth
 import { AuthService, type ProviderKind } from './auth.service.js';
 import { IdpCallbackGuard } from './idp-callback.guard.js';
 import { OAuthStateGuard } from './oauth-state.guard.js';
-import { OAUTH_STATE_COOKIE, oauthStateCookieOptions, SESSION_COOKIE, sessionCookieOptions } from './session-cookie.js';
+import { clearingOptions, OAUTH_STATE_COOKIE, oauthStateCookieOptions, SESSION_COOKIE, sessionCookieOptions } from './session-cookie.js';
 
 /** Public sign-in routes; the session cookie is set only by the callback. */
 @ApiTags('auth')
@@ -53,7 +53,7 @@ export class AuthController {
   async callback(@Req() req: AuthedRequest, @Res() res: Response): Promise<void> {
     const user = req.user as User;
     const token = await this.auth.completeSignIn(user);
-    res.clearCookie(OAUTH_STATE_COOKIE, { ...oauthStateCookieOptions(this.options.cookieSecure), maxAge: undefined });
+    res.clearCookie(OAUTH_STATE_COOKIE, clearingOptions(oauthStateCookieOptions(this.options.cookieSecure)));
     res.cookie(SESSION_COOKIE, token, sessionCookieOptions(this.options.cookieSecure));
     res.redirect(302, req.oauthReturnTo ?? '/');
   }
@@ -65,6 +65,6 @@ export class AuthController {
   async logout(@Req() req: AuthedRequest, @Res({ passthrough: true }) res: Response): Promise<void> {
     const token: unknown = req.signedCookies?.[SESSION_COOKIE];
     await this.auth.signOut(typeof token === 'string' ? token : undefined);
-    res.clearCookie(SESSION_COOKIE, { ...sessionCookieOptions(this.options.cookieSecure), maxAge: undefined });
+    res.clearCookie(SESSION_COOKIE, clearingOptions(sessionCookieOptions(this.options.cookieSecure)));
   }
 }

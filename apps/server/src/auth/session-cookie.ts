@@ -22,3 +22,9 @@ export function sessionCookieOptions(secure: boolean): CookieOptions {
 export function oauthStateCookieOptions(secure: boolean): CookieOptions {
   return { httpOnly: true, sameSite: 'lax', signed: true, secure, path: '/api/auth', maxAge: OAUTH_STATE_LIFETIME_MS };
 }
+
+/** The attributes to clear a cookie with: same path and flags, unsigned (an empty value needs no signature). */
+export function clearingOptions(options: CookieOptions): CookieOptions {
+  const { signed: _signed, maxAge: _maxAge, ...rest } = options;
+  return rest;
+}

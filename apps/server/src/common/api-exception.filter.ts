@@ -28,7 +28,8 @@ export class ApiExceptionFilter implements ExceptionFilter {
     const res = host.switchToHttp().getResponse<Response>();
     const body = this.toApiError(exception);
     if (res.headersSent) return;
-    res.status(body.statusCode).json(body);
+    // A handler may have set another Content-Type (the HTML sign-in page) before failing.
+    res.status(body.statusCode).type('application/json').json(body);
   }
 
   private toApiError(exception: unknown): ApiError {
