@@ -21,7 +21,8 @@ describe('MembersPage', () => {
       expect(within(table).getByText(member.login)).toBeTruthy();
     }
     expect(within(table).getByText('noor@kestrel-vale.example')).toBeTruthy();
-    expect(within(table).getAllByText('Designer').length).toBe(1);
+    expect(within(table).getAllByText('designer').length).toBe(1);
+    expect(within(table).getAllByText('viewer').length).toBe(1);
   });
 
   it('shows a role select per member to an owner and none to a designer', async () => {

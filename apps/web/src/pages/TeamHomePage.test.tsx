@@ -14,7 +14,7 @@ describe('TeamHomePage', () => {
     const home = await screen.findByTestId('team-home');
     expect(router.state.location.pathname).toBe('/t/kestrel-vale');
     expect(within(home).getByRole('heading', { level: 1 }).textContent).toBe('Kestrel Vale RF Photonics');
-    expect(within(home).getByTestId('role-tag').textContent).toBe('Designer');
+    expect(within(home).getByTestId('role-tag').textContent).toBe('designer');
     expect(home.textContent).toContain('Describe the chip');
     expect(home.textContent).toContain('next release');
     expect(within(home).queryAllByRole('button')).toHaveLength(0);

@@ -4,7 +4,6 @@ import { TEAM_ROLES, type TeamRole } from '@hexloom/contracts';
 import { useState, type FormEvent } from 'react';
 import { ApiErrorCallout } from '../../core/components/ApiErrorCallout.js';
 import { useCreateInvitation } from '../api/useCreateInvitation.js';
-import { roleLabels } from '../utils/roleLabels.js';
 
 /** Sends POST /api/teams/:teamId/invitations; shows the server's message and field issues on failure. */
 export function InviteMemberForm({ teamId }: { teamId: string }) {
@@ -36,7 +35,8 @@ export function InviteMemberForm({ teamId }: { teamId: string }) {
             id="invite-role"
             value={role}
             onChange={(event) => setRole(event.currentTarget.value as TeamRole)}
-            options={TEAM_ROLES.map((r) => ({ value: r, label: roleLabels[r] }))}
+            className="hx-role"
+            options={TEAM_ROLES}
           />
         </FormGroup>
         <Button type="submit" intent="primary" icon="envelope" text="Invite" loading={createInvitation.isPending} />

@@ -3,7 +3,6 @@ import { Button, HTMLSelect } from '@blueprintjs/core';
 import { Cell, Column, Table } from '@blueprintjs/table';
 import { TEAM_ROLES, type Member, type TeamRole } from '@hexloom/contracts';
 import { formatDate } from '../utils/formatDate.js';
-import { roleLabels } from '../utils/roleLabels.js';
 
 export type MembersTableProps = {
   members: readonly Member[];
@@ -28,7 +27,7 @@ export function MembersTable({ members, canManage, busyUserId, onChangeRole, onR
   const roleCell = (row: number) => {
     const member = at(row);
     if (!member) return <Cell />;
-    if (!canManage) return <Cell>{roleLabels[member.role]}</Cell>;
+    if (!canManage) return <Cell className="hx-role">{member.role}</Cell>;
     return (
       <Cell interactive>
         <HTMLSelect
@@ -39,7 +38,8 @@ export function MembersTable({ members, canManage, busyUserId, onChangeRole, onR
           value={member.role}
           disabled={busyUserId === member.userId}
           onChange={(event) => onChangeRole(member.userId, event.currentTarget.value as TeamRole)}
-          options={TEAM_ROLES.map((role) => ({ value: role, label: roleLabels[role] }))}
+          className="hx-role"
+          options={TEAM_ROLES}
         />
       </Cell>
     );
