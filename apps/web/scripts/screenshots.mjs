@@ -52,7 +52,7 @@ await context.route('**/api/**', async (route) => {
 });
 const page = context.pages()[0] ?? (await context.newPage());
 const errors = [];
-page.on('console', (msg) => { if (msg.type() === 'error' || msg.type() === 'warning') errors.push(msg.text()); });
+page.on('console', (msg) => { if (msg.type() === 'error' || msg.type() === 'warning') errors.push(`${msg.text()} ${msg.location().url}`); });
 page.on('pageerror', (err) => errors.push(String(err)));
 
 for (const theme of ['light', 'dark']) {
