@@ -33,3 +33,7 @@ export { nelderMead } from './nelder-mead.js';
 export type { MinimiseResult } from './nelder-mead.js';
 export { allPassStageDelayS, designAllPassEqualiser } from './allpass-equaliser-design.js';
 export type { AllPassEqualiser, AllPassEqualiserInput, AllPassStage } from './allpass-equaliser-design.js';
+export { randomStream } from './seeded-normal.js';
+export type { RandomStream } from './seeded-normal.js';
+export { planMonteCarlo, runMonteCarloChunk, summariseMonteCarlo } from './monte-carlo.js';
+export type { FigureSpread, MonteCarloChunk, MonteCarloRun, MonteCarloSummary } from './monte-carlo.js';
