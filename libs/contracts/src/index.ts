@@ -4,6 +4,7 @@ export * from './user.js';
 export * from './team.js';
 export * from './errors.js';
 export * from './health.js';
+export * from './auth.js';
 export * from './version.js';
 export * from './mesh/index.js';
 export * from './synth/index.js';

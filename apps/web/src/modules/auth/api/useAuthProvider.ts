@@ -1,7 +1,7 @@
 // Which identity provider the server signs people in with.
 import { useQuery } from '@tanstack/react-query';
 import { apiFetch } from '../../core/api/apiFetch.js';
-import { authProvidersSchema } from './authProvidersSchema.js';
+import { authProvidersSchema } from '@hexloom/contracts';
 
 /** Query key of the provider answer. */
 export const AUTH_PROVIDER_KEY = ['auth', 'providers'] as const;
