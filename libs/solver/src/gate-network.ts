@@ -12,6 +12,8 @@ export type GateNetwork = {
   gates: readonly { id: string; transfer: Transfer2x2 }[];
   /** Corner links and boundary bends: light leaving one end enters the other, both ways, no extra delay. */
   joins: readonly (readonly [GateEnd, GateEnd])[];
+  /** Extra loss of a join (boundary bend), dB, by index into `joins`; joins not listed are lossless. */
+  joinLossDb?: Readonly<Record<number, number>>;
   /** External ports: each is an input (light enters at that end) and an output (light leaves there). */
   ports: readonly { port: string; at: GateEnd }[];
 };
@@ -43,10 +45,25 @@ export function compileGateNetwork(network: GateNetwork): Netlist {
     if (used.has(key(e))) throw new NetlistError(`netlist: gate end ${key(e)} is used twice (${what})`);
     used.add(key(e));
   };
+  // A lossy join scales the output row of the stage that feeds it (each output slot feeds one join).
+  const rowScale = new Map<string, number>();
+  network.joins.forEach(([p, q], i) => {
+    const lossDb = network.joinLossDb?.[i] ?? 0;
+    if (!(Number.isFinite(lossDb) && lossDb >= 0)) throw new NetlistError(`netlist: join ${i} loss must be >= 0 dB, got ${lossDb}`);
+    if (lossDb > 0) for (const e of [p, q]) rowScale.set(key(e), 10 ** (-lossDb / 20));
+  });
+  const scaled = (t: Transfer2x2, gate: string, leavingEnd: 0 | 1): Transfer2x2 => {
+    const out = Float64Array.from(t);
+    for (const w of [0, 1] as const) {
+      const a = rowScale.get(key({ gate, waveguide: w, end: leavingEnd }));
+      if (a !== undefined) for (let k = 4 * w; k < 4 * w + 4; k++) out[k] = (out[k] ?? 0) * a;
+    }
+    return out;
+  };
   const stages: NetlistSpec['stages'][number][] = [];
   for (const g of network.gates) {
-    stages.push({ id: stageIdOf(g.id, 'forward'), transfer: g.transfer });
-    stages.push({ id: stageIdOf(g.id, 'reverse'), transfer: transposeTransfer(g.transfer) });
+    stages.push({ id: stageIdOf(g.id, 'forward'), transfer: scaled(g.transfer, g.id, 1) });
+    stages.push({ id: stageIdOf(g.id, 'reverse'), transfer: scaled(transposeTransfer(g.transfer), g.id, 0) });
   }
   const links: NetlistSpec['links'][number][] = [];
   for (const [p, q] of network.joins) {

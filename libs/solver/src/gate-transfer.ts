@@ -41,8 +41,8 @@ export type GateTransferInput = GatePerturbation & {
  * equal to sin^2(epsilon), and the ratio to the wanted output tan^2(epsilon) = 10^(-ER/10).
  */
 export function couplerImbalanceRad(extinctionDb: number): number {
-  if (Number.isNaN(extinctionDb) || extinctionDb <= 0) {
-    throw new SolverInputError(`solver: extinctionDb must be a positive number of dB, got ${extinctionDb}`);
+  if (Number.isNaN(extinctionDb) || extinctionDb < 0) {
+    throw new SolverInputError(`solver: extinctionDb must be a number of dB >= 0, got ${extinctionDb}`);
   }
   if (extinctionDb === Infinity) return 0;
   return Math.atan(10 ** (-extinctionDb / 20));

@@ -22,3 +22,5 @@ export { powerBalance } from './power-balance.js';
 export type { PowerBalance } from './power-balance.js';
 export { rfResponse } from './rf-response.js';
 export type { RfResponseInput, RfScheme } from './rf-response.js';
+export { netlistFromMesh } from './netlist-from-mesh.js';
+export type { MeshNetlist, MeshNetlistInput } from './netlist-from-mesh.js';

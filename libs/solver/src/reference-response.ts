@@ -53,7 +53,7 @@ export function referenceResponse(netlist: Netlist, inputPort: string, offsetsHz
     const matrix = m.map((row) => row.map(([re, im]) => complex(re ?? 0, im ?? 0)));
     const x = (lusolve(matrix as unknown as MathArray, b as unknown as MathArray) as unknown as Complex[][]).map((row) => row[0] as Complex);
     for (const e of c) {
-      const xv = x[e.col] as Complex;
+      const xv = complex(x[e.col] as Complex); // lusolve may hand back a plain number for a real entry
       const yr = e.re * xv.re - e.im * xv.im, yi = e.re * xv.im + e.im * xv.re;
       (result.re[e.port] as Float64Array)[i] = ((result.re[e.port] as Float64Array)[i] ?? 0) + zr * yr - zi * yi;
       (result.im[e.port] as Float64Array)[i] = ((result.im[e.port] as Float64Array)[i] ?? 0) + zr * yi + zi * yr;

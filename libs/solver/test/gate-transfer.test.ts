@@ -49,6 +49,6 @@ describe('gateTransfer', () => {
     expect(Math.cos(thetaForKappa(0.3) / 2) ** 2).toBeCloseTo(0.3, 14);
     expect(() => thetaForKappa(1.2)).toThrow(/kappa.*1\.2/);
     expect(() => gateTransfer({ thetaRad: 0, phiRad: 0, lossDb: -1, extinctionDb: 20 })).toThrow(SolverInputError);
-    expect(() => couplerImbalanceRad(0)).toThrow(/extinctionDb/);
+    expect(() => couplerImbalanceRad(-3)).toThrow(/extinctionDb.*-3/);
   });
 });
