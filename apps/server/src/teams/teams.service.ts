@@ -3,7 +3,7 @@ import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { CreateTeam, MyTeam, Team, User } from '@hexloom/contracts';
 import { asc, eq, like, or } from 'drizzle-orm';
 import { AuditService } from '../audit/audit.service.js';
-import { DATABASE, type Database } from '../db/database.js';
+import { DATABASE, type Database, type DbExecutor } from '../db/database.js';
 import { memberships, type TeamRow, teams } from '../db/schema/index.js';
 import { SlugTakenError } from './team-errors.js';
 import { slugify } from './slugify.js';
@@ -44,7 +44,7 @@ export class TeamsService {
    */
   async create(creator: User, body: CreateTeam): Promise<Team> {
     return this.db.transaction(async (tx) => {
-      const slug = body.slug ?? (await this.freeSlug(slugify(body.name)));
+      const slug = body.slug ?? (await this.freeSlug(tx, slugify(body.name)));
       const [row] = await tx.insert(teams).values({ slug, name: body.name }).onConflictDoNothing().returning();
       if (!row) throw new SlugTakenError(slug);
       await tx.insert(memberships).values({ teamId: row.id, userId: creator.id, role: 'owner' });
@@ -56,10 +56,10 @@ export class TeamsService {
     });
   }
 
-  private async freeSlug(base: string): Promise<string> {
+  private async freeSlug(tx: DbExecutor, base: string): Promise<string> {
     const taken = new Set(
       (
-        await this.db
+        await tx
           .select({ slug: teams.slug })
           .from(teams)
           .where(or(eq(teams.slug, base), like(teams.slug, `${base}-%`)))
