@@ -1,0 +1,94 @@
+// Touchstone writer and reader: layout rules of the IBIS Open Forum Touchstone 1.1 / 2.0 specification, round trips, errors.
+import { describe, expect, it } from 'vitest';
+import { readTouchstone, SpectrumFileError, writeTouchstone, type TouchstoneData } from '../src/index.js';
+
+/** S_ij = (10 i + j + 1) / 100 * e^{j (i - j) 0.3}: every entry distinct, so any mix-up of order shows. */
+function sample(portCount: number, frequencies: number[]): TouchstoneData {
+  const n = portCount, re = new Float64Array(frequencies.length * n * n), im = new Float64Array(re.length);
+  frequencies.forEach((_, f) => {
+    for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) {
+      const mag = (10 * i + j + 1 + f) / 100, ang = (i - j) * 0.3;
+      re[(f * n + i) * n + j] = mag * Math.cos(ang);
+      im[(f * n + i) * n + j] = mag * Math.sin(ang);
+    }
+  });
+  return { portCount: n, frequenciesHz: Float64Array.from(frequencies), re, im, referenceOhm: 50 };
+}
+
+const dataLines = (text: string): string[] => text.split('\n').filter((l) => l !== '' && !/^[!#[]/.test(l));
+
+describe('writeTouchstone', () => {
+  it('writes the option line "# GHZ S MA R 50" and the 2-port order N11 N21 N12 N22', () => {
+    // Touchstone 1.1 spec, "Option Line" and "2-port Network Data" (IBIS Open Forum).
+    const text = writeTouchstone(sample(2, [1e9]), { comments: ['hexloom test'] });
+    expect(text.split('\n')[1]).toBe('# GHZ S MA R 50');
+    const cells = dataLines(text)[0]!.split(' ').map(Number);
+    expect(cells[0]).toBe(1);
+    // Magnitudes of N11, N21, N12, N22: (0+0+1), (10+0+1), (0+1+1), (10+1+1) / 100.
+    expect([cells[1], cells[3], cells[5], cells[7]]).toEqual([0.01, 0.11, 0.02, 0.12]);
+    expect(cells[4]).toBeCloseTo(0.3 * (180 / Math.PI), 9); // angle of S21 in degrees
+  });
+
+  it('starts every matrix row on a new line with at most four pairs for 3 and 6 ports', () => {
+    // Touchstone 1.1 spec, "3-port and 4-port Network Data" and "5-port and above": row-major, <= 4 pairs per line.
+    const three = dataLines(writeTouchstone(sample(3, [1e9, 2e9])));
+    expect(three.length).toBe(6);
+    expect(three[0]!.split(' ').length).toBe(7); // frequency + 3 pairs
+    expect(three[1]!.split(' ').length).toBe(6);
+    const six = dataLines(writeTouchstone(sample(6, [1e9])));
+    expect(six.length).toBe(12); // each row of 6 pairs: 4 + 2
+    expect(six.every((l, i) => l.split(' ').length <= (i === 0 ? 9 : 8))).toBe(true);
+  });
+
+  it('writes the version 2.0 keywords in the order the standard asks', () => {
+    // Touchstone 2.0 spec: [Version] first, option line, [Number of Ports], [Two-Port Data Order] for 2-ports,
+    // [Number of Frequencies], [Network Data], data, [End].
+    const text = writeTouchstone(sample(2, [1e9, 2e9, 3e9]), { version: '2.0', format: 'RI' });
+    const lines = text.trim().split('\n');
+    expect(lines.slice(0, 6)).toEqual(['[Version] 2.0', '# GHZ S RI R 50', '[Number of Ports] 2', '[Two-Port Data Order] 21_12', '[Number of Frequencies] 3', '[Network Data]']);
+    expect(lines.at(-1)).toBe('[End]');
+  });
+
+  it('refuses frequencies that do not increase', () => {
+    expect(() => writeTouchstone(sample(1, [2e9, 1e9]))).toThrow(/increase strictly/);
+  });
+});
+
+describe('readTouchstone', () => {
+  for (const version of ['1.1', '2.0'] as const) {
+    for (const format of ['MA', 'DB', 'RI'] as const) {
+      it(`reads back what the writer wrote, version ${version}, ${format}, 2 and 5 ports`, () => {
+        for (const ports of [2, 5]) {
+          const data = sample(ports, [1e9, 1.5e9, 2.25e9]);
+          const back = readTouchstone(writeTouchstone(data, { version, format, frequencyUnit: 'MHZ' }), { fileName: `chip.s${ports}p` });
+          expect(back.portCount).toBe(ports);
+          expect(back.version).toBe(version);
+          back.frequenciesHz.forEach((f, i) => expect(f).toBeCloseTo(data.frequenciesHz[i]!, 3));
+          back.re.forEach((v, k) => {
+            expect(v).toBeCloseTo(data.re[k]!, 10);
+            expect(back.im[k]!).toBeCloseTo(data.im[k]!, 10);
+          });
+        }
+      });
+    }
+  }
+
+  it('takes the defaults GHZ S MA R 50 when the option line is bare, and ignores comments', () => {
+    // Touchstone 1.1: "#" alone means GHZ S MA R 50.
+    const f = readTouchstone('! bench run 7\n#\n1 0.5 90 ! trailing comment\n2 0.25 -90\n', { fileName: 'x.s1p' });
+    expect([...f.frequenciesHz]).toEqual([1e9, 2e9]);
+    expect(f.im[0]).toBeCloseTo(0.5, 14);
+    expect(f.im[1]).toBeCloseTo(-0.25, 14);
+    expect(f.referenceOhm).toBe(50);
+  });
+
+  it('names the line and the reason for malformed files', () => {
+    const read = (text: string, fileName = 'm.s2p') => () => readTouchstone(text, { fileName });
+    expect(read('# GHZ S MA R 50\n1 0.1 0 0.2 0 0.3 0 0.4 0\n2 0.1 x 0.2 0 0.3 0 0.4 0\n')).toThrow(/touchstone line 3: "x" is not a number/);
+    expect(read('# GHZ S MA R 50\n1 0.1 0 0.2 0 0.3 0\n')).toThrow(/line 2: incomplete record: 2-port data needs 9 numbers/);
+    expect(read('# GHZ Z MA R 50\n1 0.1 0\n', 'm.s1p')).toThrow(/line 1: only S-parameters/);
+    expect(read('# GHZ S MA R 50\n2 0.1 0\n1 0.1 0\n', 'm.s1p')).toThrow(/line 3: frequency 1 does not increase/);
+    expect(read('[Version] 2.0\n# GHZ S MA R 50\n[Number of Ports] 1\n[Network Data]\n1 0.1 0\n', 'noext')).toThrow(/missing \[End\]/);
+    expect(read('# GHZ S MA R 50\n1 0.1 0\n', 'noext')).toThrow(SpectrumFileError);
+  });
+});
