@@ -37,3 +37,7 @@ export { randomStream } from './seeded-normal.js';
 export type { RandomStream } from './seeded-normal.js';
 export { planMonteCarlo, runMonteCarloChunk, summariseMonteCarlo } from './monte-carlo.js';
 export type { FigureSpread, MonteCarloChunk, MonteCarloRun, MonteCarloSummary } from './monte-carlo.js';
+export type { RealisationNote } from './realisation-note.js';
+export { isRealisablePerimeter, perimeterForFsr } from './ring-perimeter.js';
+export { designCircuit } from './design-circuit.js';
+export type { CircuitDesign, DesignResult } from './design-circuit.js';
