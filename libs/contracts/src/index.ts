@@ -8,3 +8,4 @@ export * from './auth.js';
 export * from './version.js';
 export * from './mesh/index.js';
 export * from './synth/index.js';
+export * from './solver/index.js';

@@ -32,3 +32,5 @@ export { readTouchstone } from './touchstone-read.js';
 export type { TouchstoneFile, TouchstoneReadOptions } from './touchstone-read.js';
 export { readSpectrumCsv, SPECTRUM_CSV_COLUMNS, writeSpectrumCsv } from './spectrum-csv.js';
 export type { MeasuredSpectrum } from './spectrum-csv.js';
+export { simulateConnection } from './simulate-connection.js';
+export type { ConnectionInput, ConnectionResult } from './simulate-connection.js';
