@@ -1,0 +1,57 @@
+/** `hexloom sparams`: the S-matrix of a configured chip between chosen ports, as Touchstone or JSON. */
+import type { Command } from 'commander';
+import { S_PARAMETERS_SCHEMA_VERSION, sParametersFileSchema } from '@hexloom/contracts';
+import { sMatrix, writeTouchstone, type TouchstoneFormat, type TouchstoneVersion } from '@hexloom/solver';
+import { CliError } from '../cli-error.js';
+import { emit, loadChip, parseGrid, resolvePort, warn } from './simulate.js';
+
+type SparamsOptions = { ports?: string; span?: string; points: string; format: string; touchstone: string; data: string; out?: string };
+
+export function registerSparamsCommand(program: Command): void {
+  program
+    .command('sparams')
+    .description('S-parameters of a configuration between chosen ports (Touchstone .sNp or JSON)')
+    .argument('<configuration>', 'configuration JSON file (embeds its mesh definition)')
+    .option('--ports <list>', 'comma-separated ports (ids or labels), in Touchstone port order (default: every port)')
+    .option('--span <start:stop>', 'frequency offsets from the reference, GHz (default: one whole unit FSR)')
+    .option('--points <n>', 'number of frequency points', '256')
+    .option('--format <format>', 'touchstone or json', 'touchstone')
+    .option('--touchstone <version>', 'Touchstone version, 1.1 or 2.0', '1.1')
+    .option('--data <format>', 'Touchstone data format: MA, DB or RI', 'MA')
+    .option('--out <file>', 'write to a file instead of stdout (e.g. chip.s4p)')
+    .action((path: string, options: SparamsOptions) => {
+      const chip = loadChip(path);
+      const ports = options.ports ? options.ports.split(',').map((p) => resolvePort(chip, p.trim())) : [...chip.netlist.inputPorts];
+      if (new Set(ports).size !== ports.length) throw new CliError(`--ports lists a port twice: ${options.ports ?? ''}`);
+      const grid = parseGrid(options.span, options.points);
+      const s = sMatrix(chip.netlist, { ports, grid, unitDelayS: chip.unitDelayS, referenceFrequencyHz: chip.referenceFrequencyHz });
+      warn(s.runs.map((r) => r.warning));
+      const frequenciesHz = s.offsetsHz.map((f) => s.referenceFrequencyHz + f);
+      if (options.format === 'json') {
+        const P = ports.length;
+        const cube = (v: Float64Array) => [...frequenciesHz].map((_, f) => ports.map((_, i) => ports.map((_, j) => v[(f * P + i) * P + j] ?? 0)));
+        const file = sParametersFileSchema.parse({
+          schemaVersion: S_PARAMETERS_SCHEMA_VERSION,
+          kind: 'hexloom-sparameters',
+          ports,
+          referenceOhm: 50,
+          referenceFrequencyHz: s.referenceFrequencyHz,
+          frequencyHz: [...frequenciesHz],
+          re: cube(s.re),
+          im: cube(s.im),
+          runs: s.runs,
+        });
+        emit(`${JSON.stringify(file)}\n`, options.out);
+        return;
+      }
+      if (options.format !== 'touchstone') throw new CliError(`--format must be touchstone or json, got "${options.format}"`);
+      if (options.touchstone !== '1.1' && options.touchstone !== '2.0') throw new CliError(`--touchstone must be 1.1 or 2.0, got "${options.touchstone}"`);
+      const data = options.data.toUpperCase();
+      if (data !== 'MA' && data !== 'DB' && data !== 'RI') throw new CliError(`--data must be MA, DB or RI, got "${options.data}"`);
+      const comments = ['hexloom sparams', ...ports.map((p, i) => `port ${i + 1} = ${p}`)];
+      emit(
+        writeTouchstone({ portCount: ports.length, frequenciesHz, re: s.re, im: s.im, referenceOhm: 50 }, { version: options.touchstone as TouchstoneVersion, format: data as TouchstoneFormat, comments }),
+        options.out,
+      );
+    });
+}
