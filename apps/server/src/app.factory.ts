@@ -1,5 +1,5 @@
 /** createHexloomApp: database, migrations, seed, middleware, OpenAPI; returns an initialised app. */
-import type { INestApplication, LogLevel } from '@nestjs/common';
+import { type INestApplication, Logger, type LogLevel } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import cookieParser from 'cookie-parser';
@@ -49,7 +49,9 @@ export async function createHexloomApp(options: CreateHexloomAppOptions): Promis
     );
     app.use(cookieParser(resolved.sessionSecret));
     setupOpenApi(app);
-    if (resolved.webDistDir) serveWebApp(app, resolved.webDistDir);
+    if (resolved.webDistDir && !serveWebApp(app, resolved.webDistDir)) {
+      new Logger('Hexloom').warn(`No built web app at ${resolved.webDistDir} (run npm run build -w apps/web); serving the API only`);
+    }
     await app.init();
     return app;
   } catch (error) {

@@ -69,6 +69,13 @@ describe('route x role matrix', () => {
     { route: 'GET /api/auth/providers', call: (a) => a.get('/api/auth/providers'), expected: everyone(200) },
     { route: 'GET /api/auth/login', call: (a) => a.get('/api/auth/login?returnTo=/x'), expected: everyone(302) },
     { route: 'GET /api/docs-json', call: (a) => a.get('/api/docs-json'), expected: everyone(200) },
+    { route: 'GET /api/auth/callback (no code, no state)', call: (a) => a.get('/api/auth/callback'), expected: everyone(400) },
+    {
+      route: 'GET /api/local-idp/authorize',
+      call: (a) => a.get('/api/local-idp/authorize?client_id=hexloom-local&state=s&redirect_uri=http%3A%2F%2Flocalhost%3A3000%2Fapi%2Fauth%2Fcallback'),
+      expected: everyone(200),
+    },
+    { route: 'GET /api/local-idp/user (no bearer token)', call: (a) => a.get('/api/local-idp/user'), expected: everyone(401) },
     { route: 'GET /api/me', call: (a) => a.get('/api/me'), expected: signedIn(200) },
     { route: 'GET /api/teams', call: (a) => a.get('/api/teams'), expected: signedIn(200) },
     {
@@ -136,5 +143,16 @@ describe('route x role matrix', () => {
       ['member.role_changed', 'ilse', 'tobin'],
       ['invitation.created', 'ilse', 'to-revoke@kestrel-vale.example'],
     ]);
+  });
+
+  it('POST /api/auth/logout answers everyone 204, after which nobody is signed in', async () => {
+    for (const actor of ACTORS) {
+      const res = await agents[actor].post('/api/auth/logout');
+      expect({ actor, status: res.status }).toEqual({ actor, status: 204 });
+    }
+    for (const actor of ACTORS) {
+      const res = await agents[actor].get('/api/me');
+      expect({ actor, status: res.status }).toEqual({ actor, status: 401 });
+    }
   });
 });
