@@ -1,16 +1,15 @@
 /** /api/auth routes: provider kind, login redirect, OAuth callback, logout. */
 import { Controller, Get, HttpCode, Inject, Post, Query, Req, Res, UseGuards } from '@nestjs/common';
 import { ApiBadRequestResponse, ApiFoundResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiQuery, ApiTags } from '@nestjs/swagger';
-import type { User } from '@hexloom/contracts';
+import { type AuthProviders, authProvidersSchema, type User } from '@hexloom/contracts';
 import type { Response } from 'express';
-import { z } from 'zod';
 import type { AuthedRequest } from '../common/authed-request.js';
 import { HEXLOOM_OPTIONS, type ResolvedOptions } from '../common/hexloom-options.js';
 import { openApiSchema } from '../common/openapi-schema.js';
 import { Public } from '../common/public.decorator.js';
 import { ZodValidationPipe } from '../common/zod-validation.pipe.js';
 import { type LoginQuery, loginQuerySchema, type OAuthStateCookie } from './auth.schemas.js';
-import { AuthService, type ProviderKind } from './auth.service.js';
+import { AuthService } from './auth.service.js';
 import { IdpCallbackGuard } from './idp-callback.guard.js';
 import { OAuthStateGuard } from './oauth-state.guard.js';
 import { clearingOptions, OAUTH_STATE_COOKIE, oauthStateCookieOptions, SESSION_COOKIE, sessionCookieOptions } from './session-cookie.js';
@@ -27,8 +26,8 @@ export class AuthController {
 
   @Get('providers')
   @ApiOperation({ summary: "Which identity provider signs people in ('local' = the built-in fake one)" })
-  @ApiOkResponse({ schema: openApiSchema(z.object({ provider: z.enum(['github', 'local']) })) })
-  providers(): { provider: ProviderKind } {
+  @ApiOkResponse({ schema: openApiSchema(authProvidersSchema) })
+  providers(): AuthProviders {
     return { provider: this.auth.providerKind() };
   }
 

@@ -1,7 +1,7 @@
 /** Sign-in bookkeeping: upsert the user, accept invitations, open and close sessions, audit. */
 import { randomBytes } from 'node:crypto';
 import { Inject, Injectable } from '@nestjs/common';
-import type { User } from '@hexloom/contracts';
+import type { AuthProviderName, User } from '@hexloom/contracts';
 import { AuditService } from '../audit/audit.service.js';
 import { HEXLOOM_OPTIONS, type ResolvedOptions } from '../common/hexloom-options.js';
 import { DATABASE, type Database } from '../db/database.js';
@@ -10,9 +10,6 @@ import { InvitationsService } from '../invitations/invitations.service.js';
 import { LOCAL_IDP_CLIENT_ID } from '../local-idp/local-idp.service.js';
 import type { OAuthProfile } from './oauth-profile.js';
 import { SessionsService } from './sessions.service.js';
-
-/** Which identity provider this instance uses. */
-export type ProviderKind = 'github' | 'local';
 
 /** Both providers store users under provider `github`; the fake one's ids never collide. */
 const USER_PROVIDER = 'github';
@@ -29,7 +26,7 @@ export class AuthService {
   ) {}
 
   /** `'github'` with credentials configured, else the built-in fake provider. */
-  providerKind(): ProviderKind {
+  providerKind(): AuthProviderName {
     return this.options.github ? 'github' : 'local';
   }
 
