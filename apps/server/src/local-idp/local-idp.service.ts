@@ -13,6 +13,9 @@ export const LOCAL_IDP_CLIENT_ID = 'hexloom-local';
 /** Codes live ten minutes, like the code host's. */
 export const CODE_LIFETIME_MS = 10 * 60 * 1000;
 
+/** Access tokens are only needed right after the exchange; one hour is plenty. */
+const TOKEN_LIFETIME_MS = 60 * 60 * 1000;
+
 /** An account chosen or typed on the authorize page. */
 export type AccountChoice = { login: string; name?: string | undefined; email?: string | undefined };
 
@@ -22,7 +25,7 @@ type CodeRecord = { profile: LocalIdpProfile; clientId: string; redirectUri: str
 @Injectable()
 export class LocalIdpService {
   private readonly codes = new Map<string, CodeRecord>();
-  private readonly tokens = new Map<string, LocalIdpProfile>();
+  private readonly tokens = new Map<string, { profile: LocalIdpProfile; expiresAtMs: number }>();
 
   constructor(@Inject(HEXLOOM_OPTIONS) private readonly options: ResolvedOptions) {}
 
@@ -66,21 +69,24 @@ export class LocalIdpService {
       throw new AuthorizationCodeError('wrong-client', code);
     }
     const token = randomBytes(20).toString('hex');
-    this.tokens.set(token, record.profile);
+    this.tokens.set(token, { profile: record.profile, expiresAtMs: Date.now() + TOKEN_LIFETIME_MS });
     return token;
   }
 
-  /** The profile behind a bearer token; 401 for an unknown token. */
+  /** The profile behind a bearer token; 401 for an unknown or expired token. */
   userForToken(token: string): LocalIdpProfile {
-    const profile = this.tokens.get(token);
-    if (!profile) throw new UnauthorizedException('Unknown or revoked access token');
-    return profile;
+    const entry = this.tokens.get(token);
+    if (!entry || Date.now() > entry.expiresAtMs) throw new UnauthorizedException('Unknown or expired access token');
+    return entry.profile;
   }
 
   private prune(): void {
     const nowMs = Date.now();
     for (const [code, record] of this.codes) {
       if (record.expiresAtMs + CODE_LIFETIME_MS < nowMs) this.codes.delete(code);
+    }
+    for (const [token, entry] of this.tokens) {
+      if (entry.expiresAtMs < nowMs) this.tokens.delete(token);
     }
   }
 }

@@ -1,6 +1,6 @@
 /** Team members: list, change role, remove; keeps at least one owner per team. */
 import { Inject, Injectable, NotFoundException } from '@nestjs/common';
-import type { Member, TeamRole, User } from '@hexloom/contracts';
+import { type Member, TEAM_ROLES, type TeamRole, type User } from '@hexloom/contracts';
 import { and, asc, count, eq } from 'drizzle-orm';
 import { AuditService } from '../audit/audit.service.js';
 import { DATABASE, type Database, type DbExecutor } from '../db/database.js';
@@ -36,7 +36,7 @@ export class MembersService {
       .innerJoin(users, eq(users.id, memberships.userId))
       .where(eq(memberships.teamId, teamId))
       .orderBy(asc(users.login));
-    const rank = (role: TeamRole): number => ['owner', 'designer', 'reviewer', 'viewer'].indexOf(role);
+    const rank = (role: TeamRole): number => TEAM_ROLES.indexOf(role);
     return rows.map(toMember).sort((a, b) => rank(a.role) - rank(b.role));
   }
 
