@@ -1,0 +1,79 @@
+/** Places an all-pass ring (a closed loop of a given perimeter) coupled at a split gate to a bus path. */
+import { legBetween, legInto, legOutOf, linksOn } from './legs.js';
+import { pathDistances, UNREACHABLE } from './path-distances.js';
+import type { ResolvedStep } from './resolve-circuit.js';
+import { routeFailure, type RouteFailure } from './route-failure.js';
+import type { RouteSpace } from './route-space.js';
+
+/** A placed ring: the split gate, the bus legs into and out of it, and the ring walk (perimeter - 1 steps). */
+export type RingPlacement = {
+  readonly coupler: number;
+  readonly busIn: number;
+  readonly busOut: number;
+  readonly legIn: readonly ResolvedStep[];
+  readonly legOut: readonly ResolvedStep[];
+  readonly ring: readonly ResolvedStep[];
+};
+
+/** Checks a ring perimeter: loops on the hexagonal lattice are even and at least one cell (6 units). */
+export function checkPerimeter(perimeterUnits: number): RouteFailure | undefined {
+  if (!Number.isInteger(perimeterUnits) || perimeterUnits % 2 !== 0)
+    return routeFailure('wrong-parity', `ring perimeter ${perimeterUnits} is not even; every closed loop on the hexagonal lattice is even (6, 8, 10, ...)`);
+  if (perimeterUnits < 6) return routeFailure('too-short', `ring perimeter ${perimeterUnits} is below 6 units, the loop around one cell`);
+  return undefined;
+}
+
+/**
+ * Yields ring placements between bus source `sourceIn` (light entering there) and bus target
+ * `targetOut`, best first (shortest bus through the coupler). While a placement is yielded its
+ * gates are marked in the space; resuming the generator frees them and tries the next.
+ * Candidates are coupler gates ranked by bus length, at most `maxCandidates` tried.
+ */
+export function* ringPlacements(
+  space: RouteSpace,
+  args: { sourceIn: number; targetOut: number; perimeterUnits: number; budget?: number; maxCandidates?: number },
+): Generator<RingPlacement, RouteFailure, undefined> {
+  const mesh = space.mesh;
+  const dIn = pathDistances(space, [args.sourceIn]);
+  const dOut = pathDistances(space, [args.targetOut]);
+  const candidates: { score: number; g: number; busIn: number; busOut: number }[] = [];
+  for (let g = 0; g < mesh.gates.length; g++) {
+    if (!space.canSplit(g)) continue;
+    for (let k = 0; k < 4; k++) {
+      const busIn = (g << 2) | k;
+      const c1 = busIn === args.sourceIn ? 0 : linksOn(space, busIn) ? dIn[mesh.link[busIn]!]! : UNREACHABLE;
+      if (c1 >= UNREACHABLE) continue;
+      for (let side = 0; side < 2; side++) {
+        const busOut = (g << 2) | (side << 1) | ((busIn & 1) ^ 1);
+        const c2 = busOut === args.targetOut ? 0 : linksOn(space, busOut) ? dOut[mesh.link[busOut]!]! : UNREACHABLE;
+        if (c2 >= UNREACHABLE || !linksOn(space, busIn ^ 2) || !linksOn(space, busOut ^ 2)) continue;
+        candidates.push({ score: c1 + c2, g, busIn, busOut });
+      }
+    }
+  }
+  candidates.sort((x, y) => x.score - y.score);
+  let lastFailure: RouteFailure = routeFailure('no-free-path', 'ring: no free gate can couple a ring to a bus between these ports');
+  const limit = Math.min(candidates.length, args.maxCandidates ?? 600);
+  for (let i = 0; i < limit; i++) {
+    const c = candidates[i]!;
+    space.claimSplit(c.g);
+    const ring = legBetween(space, c.busOut ^ 2, c.busIn ^ 2, args.perimeterUnits - 1, 'ring', args.budget ?? 20_000);
+    if (ring.ok) {
+      space.useAll(ring.steps);
+      const legIn = legInto(space, args.sourceIn, c.busIn, 'bus into the ring coupler');
+      if (legIn.ok) {
+        space.useAll(legIn.steps);
+        const legOut = legOutOf(space, c.busOut, args.targetOut, 'bus out of the ring coupler');
+        if (legOut.ok) {
+          space.useAll(legOut.steps);
+          yield { coupler: c.g, busIn: c.busIn, busOut: c.busOut, legIn: legIn.steps, legOut: legOut.steps, ring: ring.steps };
+          space.releaseAll(legOut.steps);
+        } else lastFailure = legOut;
+        space.releaseAll(legIn.steps);
+      } else lastFailure = legIn;
+      space.releaseAll(ring.steps);
+    } else lastFailure = ring;
+    space.releaseSplit(c.g);
+  }
+  return routeFailure(lastFailure.reason === 'search-limit' ? 'search-limit' : 'not-enough-free-area', `ring of ${args.perimeterUnits} units: no placement found among ${limit} candidate couplers (last: ${lastFailure.message})`);
+}
