@@ -1,0 +1,2 @@
+/** @hexloom/bench: calibration, drive values and exchange with the lab bench (pure, portable). */
+export {};
