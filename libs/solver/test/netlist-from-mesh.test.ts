@@ -119,3 +119,22 @@ describe('netlistFromMesh on hexagonal blocks', () => {
     }
   });
 });
+
+describe('netlistFromMesh with per-gate perturbations', () => {
+  const mesh = meshWithIo({ kind: 'hexagon', radius: 1 }, DEMO_TECH, 3);
+  const configuration = spreadConfiguration(mesh);
+
+  it('applies a phase error to the named gate only', () => {
+    const gate = mesh.gates[4]!.id;
+    const base = netlistFromMesh({ mesh, configuration });
+    const moved = netlistFromMesh({ mesh, configuration, perturbations: { [gate]: { thetaErrorRad: 0.05 } } });
+    base.network.gates.forEach((g, i) => {
+      const same = [...g.transfer].every((v, k) => v === moved.network.gates[i]!.transfer[k]);
+      expect(same).toBe(g.id !== gate);
+    });
+  });
+
+  it('rejects a perturbation of a gate the mesh does not have', () => {
+    expect(() => netlistFromMesh({ mesh, configuration, perturbations: { 'g(9,9)e': { phiErrorRad: 0.1 } } })).toThrow(/g\(9,9\)e/);
+  });
+});

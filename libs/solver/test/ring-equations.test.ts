@@ -65,6 +65,26 @@ describe('a six-unit all-pass ring', () => {
     expect(s.groupDelayS[centre]!).toBeLessThan(0);
   });
 
+  it('has the group delay of the all-pass phase at every frequency, and its dispersion', () => {
+    // tau(phi)/T_rt = (a^2 - a t cos phi)/(a^2 - 2 a t cos phi + t^2) + (a t cos phi - a^2 t^2)/(1 - 2 a t cos phi + a^2 t^2):
+    // minus the phase derivative of (t - a e^{-j phi})/(1 - t a e^{-j phi}) (Yariv 2000 eq. (3); Rabus 2007 sec. 2.1).
+    // Dispersion D = -(f^2 / c) d tau / d f (common practice), d tau / d f by a central difference of the formula.
+    const tauUnits = (phi: number): number => {
+      const c = Math.cos(phi);
+      return 1 + 6 * ((a * a - a * t * c) / (a * a - 2 * a * t * c + t * t) + (a * t * c - a * a * t * t) / (1 - 2 * a * t * c + a * a * t * t));
+    };
+    for (let i = 0; i < s.offsetsHz.length; i += 53) {
+      const f = s.offsetsHz[i]!;
+      const phi = 2 * Math.PI * f * 6 * T_U;
+      expect(s.groupDelayS[i]! / T_U).toBeCloseTo(tauUnits(phi), 8);
+      const df = 1e5;
+      const dTauDf = ((tauUnits(2 * Math.PI * (f + df) * 6 * T_U) - tauUnits(2 * Math.PI * (f - df) * 6 * T_U)) * T_U) / (2 * df);
+      const expectedD = (-((F0 + f) ** 2) / 299_792_458) * dTauDf * 1e3; // s/m -> ps/nm
+      // Relative 1e-5, with an absolute floor of 1e-5 ps/nm where D crosses zero (at resonance and anti-resonance).
+      expect(Math.abs(s.dispersionPsPerNm[i]! - expectedD)).toBeLessThan(1e-5 * (Math.abs(expectedD) + 1));
+    }
+  });
+
   it('has a positive resonant group delay when over-coupled', () => {
     const over = respond(allPassRing(0.5, lossDb), 'in', 0);
     const tOver = Math.sqrt(0.5);
