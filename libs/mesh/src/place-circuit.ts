@@ -5,7 +5,7 @@ import type { ParkedState } from './gate-state.js';
 import type { MeshDefinition } from './mesh-definition.js';
 import { MeshError } from './mesh-error.js';
 import type { Mesh } from './mesh.js';
-import { routeCircuit } from './route-circuit.js';
+import { circuitSettings, routeCircuit } from './route-circuit.js';
 import type { RouteFailure } from './route-failure.js';
 import type { RouteRequest } from './route-request.js';
 
@@ -26,8 +26,20 @@ export function placeCircuit(configuration: Configuration, request: RouteRequest
   return { ok: true, configuration: { ...configuration, gates, circuits: [...configuration.circuits, r.circuit] }, circuit: r.circuit, pathLengthsUnits: r.pathLengthsUnits };
 }
 
-/** The configuration without circuit `id`; its gates return to the parked state. Throws MeshError if there is no such circuit. */
-export function removeCircuit(configuration: Configuration, id: string): Configuration {
+/**
+ * The configuration without circuit `id`; gates only it used return to the parked state, gates it
+ * shared keep the setting the remaining circuits need. Throws MeshError if there is no such circuit.
+ */
+export function removeCircuit(configuration: Configuration, id: string, mesh: Mesh = buildMesh(configuration.mesh)): Configuration {
   if (!configuration.circuits.some((c) => c.id === id)) throw new MeshError('unknown-circuit', `there is no circuit ${id} in this configuration`);
-  return { ...configuration, circuits: configuration.circuits.filter((c) => c.id !== id), gates: configuration.gates.filter((g) => g.circuit !== id) };
+  const circuits = configuration.circuits.filter((c) => c.id !== id);
+  const gates = configuration.gates.filter((g) => g.circuit !== id);
+  const kept = new Set(gates.map((g) => g.gate));
+  for (const c of circuits)
+    for (const s of circuitSettings(mesh, c)) {
+      if (kept.has(s.gate)) continue;
+      kept.add(s.gate);
+      gates.push(s);
+    }
+  return { ...configuration, circuits, gates };
 }

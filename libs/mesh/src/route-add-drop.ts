@@ -2,6 +2,7 @@
 import { gateTerminal, portTerminal, type CircuitDraft } from './circuit-draft.js';
 import { legInto, legOutOf } from './legs.js';
 import type { Mesh } from './mesh.js';
+import { pathDistances } from './path-distances.js';
 import { checkPerimeter, ringPlacements } from './route-ring.js';
 import { routeFailure, type RouteFailure } from './route-failure.js';
 import type { RouteSpace } from './route-space.js';
@@ -13,9 +14,12 @@ export function routeAddDrop(mesh: Mesh, space: RouteSpace, a: AddDropArgs): Cir
   const bad = checkPerimeter(a.perimeterUnits);
   if (bad) return bad;
   const src = mesh.ports[a.from]!.gatePort;
-  const gen = ringPlacements(space, { sourceIn: src, targetOut: mesh.ports[a.to]!.gatePort, perimeterUnits: a.perimeterUnits, budget: a.budget });
+  // Pull the ring towards the drop bus so that the second bus need not cross the first.
+  const bias = pathDistances(space, [mesh.ports[a.drop]!.gatePort]);
+  const gen = ringPlacements(space, { sourceIn: src, targetOut: mesh.ports[a.to]!.gatePort, perimeterUnits: a.perimeterUnits, budget: a.budget, bias, maxCandidates: 400 });
   let last: RouteFailure = routeFailure('not-enough-free-area', 'add-drop ring: no placement');
-  for (let r = gen.next(); !r.done; r = gen.next()) {
+  let r = gen.next();
+  for (; !r.done; r = gen.next()) {
     const p = r.value;
     // Try each ring gate as the drop coupler, the drop bus using its other waveguide in the ring's direction.
     for (let k = 0; k < p.ring.length; k++) {
@@ -23,12 +27,15 @@ export function routeAddDrop(mesh: Mesh, space: RouteSpace, a: AddDropArgs): Cir
       space.release(s.inPort, s.outPort);
       if (space.canSplit(s.gate)) {
         space.claimSplit(s.gate);
-        const addIn = a.add === undefined ? { ok: true as const, steps: [] } : legInto(space, mesh.ports[a.add]!.gatePort, s.inPort ^ 2, 'add bus');
-        if (addIn.ok) {
-          space.useAll(addIn.steps);
-          const dropOut = legOutOf(space, s.outPort ^ 2, mesh.ports[a.drop]!.gatePort, 'drop bus');
-          space.releaseAll(addIn.steps);
-          if (dropOut.ok) {
+        // The drop bus first (it is required), then the optional add bus on what is left.
+        const dropOut = legOutOf(space, s.outPort ^ 2, mesh.ports[a.drop]!.gatePort, 'drop bus');
+        let addIn: ReturnType<typeof legInto> = { ok: true, steps: [] };
+        if (dropOut.ok && a.add !== undefined) {
+          space.useAll(dropOut.steps);
+          addIn = legInto(space, mesh.ports[a.add]!.gatePort, s.inPort ^ 2, 'add bus');
+          space.releaseAll(dropOut.steps);
+        }
+        if (dropOut.ok && addIn.ok) {
             const paths: CircuitDraft['paths'][number][] = [
               { role: 'bus', from: portTerminal(mesh, a.from), to: gateTerminal(p.busIn), steps: p.legIn },
               { role: 'bus', from: gateTerminal(p.busOut), to: portTerminal(mesh, a.to), steps: p.legOut },
@@ -45,12 +52,12 @@ export function routeAddDrop(mesh: Mesh, space: RouteSpace, a: AddDropArgs): Cir
               ],
             };
           }
-          last = dropOut;
-        } else last = addIn;
+        last = dropOut.ok ? (addIn as Exclude<typeof addIn, { ok: true }>) : dropOut;
         space.releaseSplit(s.gate);
       }
       space.use(s.inPort, s.outPort);
     }
   }
+  if (r.done && last.message === 'add-drop ring: no placement') last = r.value;
   return routeFailure(last.reason === 'search-limit' ? 'search-limit' : 'not-enough-free-area', `add-drop ring of ${a.perimeterUnits} units: no ring reaches a free drop bus (${last.message})`);
 }

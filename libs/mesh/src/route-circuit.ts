@@ -103,11 +103,8 @@ export function routeCircuit(mesh: Mesh, circuits: readonly Circuit[], request: 
       region.add(i);
     }
   }
-  const space = new RouteSpace(
-    mesh,
-    circuits.map((c) => resolveCircuit(mesh, c)),
-    { region },
-  );
+  const resolved = circuits.map((c) => resolveCircuit(mesh, c));
+  const space = new RouteSpace(mesh, resolved, { region });
   const port = new Map<string, number>();
   for (const name of portsOf(request)) {
     const i = mesh.portIndex.get(name);
@@ -116,7 +113,13 @@ export function routeCircuit(mesh: Mesh, circuits: readonly Circuit[], request: 
     if ([...port.values()].includes(i)) return routeFailure('invalid-request', `port ${name} is named twice in the request`);
     port.set(name, i);
   }
-  const draft = route(mesh, space, request, port);
+  // First keep off the entry gates of the other free ports (so that they stay reachable), then, if
+  // that fails, use them too.
+  const mine = new Set(port.values());
+  const reserved = new Set(mesh.ports.filter((q) => !space.portUsed[q.index] && !mine.has(q.index)).map((q) => q.gatePort >> 2));
+  for (const p of mine) reserved.delete(mesh.ports[p]!.gatePort >> 2);
+  const polite = route(mesh, new RouteSpace(mesh, resolved, { region, reserved }), request, port);
+  const draft = 'ok' in polite ? route(mesh, space, request, port) : polite;
   if ('ok' in draft) return draft;
   const circuit = draftToCircuit(mesh, draft, { id: request.id, kind: request.kind as CircuitKind, region: request.region });
   return { ok: true, circuit, settings: circuitSettings(mesh, circuit), pathLengthsUnits: draft.paths.map((p) => p.steps.length) };

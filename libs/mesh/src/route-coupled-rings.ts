@@ -1,5 +1,6 @@
 /** Places a chain of adjacent single-cell rings coupled through their shared gates, with input and output buses. */
-import { axialDistance, axialNeighbour } from './axial.js';
+import { axialNeighbour } from './axial.js';
+import { pathDistances } from './path-distances.js';
 import { cellFrame } from './cell-frame.js';
 import { gateTerminal, portTerminal, type CircuitDraft, type DraftPath } from './circuit-draft.js';
 import { legInto, legOutOf } from './legs.js';
@@ -46,12 +47,11 @@ export function routeCoupledRings(mesh: Mesh, space: RouteSpace, a: CoupledRings
   if (!Number.isInteger(N) || N < 1) return routeFailure('invalid-request', `ring count ${N} must be a whole number >= 1`);
   if (a.kappas.length !== N + 1) return routeFailure('invalid-request', `a chain of ${N} rings needs ${N + 1} kappas, got ${a.kappas.length}`);
   const f = cellFrame(mesh);
-  const near = (port: number) => {
-    const g = mesh.gates[mesh.ports[port]!.gatePort >> 2]!;
-    return mesh.cells[g.sideCells.find((c) => c >= 0)!]!;
-  };
-  const inCell = near(a.from);
-  const outCell = near(a.drop);
+  // Rank chains by how close their end cells' gates are to the input and drop ports (breadth-first distances).
+  const dFrom = pathDistances(space, [mesh.ports[a.from]!.gatePort]);
+  const dDrop = pathDistances(space, [mesh.ports[a.drop]!.gatePort]);
+  const gateScore = (d: Int32Array, g: number) => Math.min(d[g << 2]!, d[(g << 2) | 1]!, d[(g << 2) | 2]!, d[(g << 2) | 3]!);
+  const cellScore = (d: Int32Array, c: number, skip: number) => Math.min(...[0, 1, 2, 3, 4, 5].filter((i) => i !== skip).map((i) => gateScore(d, f.gates[c * 6 + i]!)));
   const chains: { cells: number[]; dir: number; score: number }[] = [];
   for (const c of mesh.cells)
     for (let dir = 0; dir < 6; dir++) {
@@ -61,7 +61,7 @@ export function routeCoupledRings(mesh: Mesh, space: RouteSpace, a: CoupledRings
         if (i === undefined) break;
         cells.push(i);
       }
-      if (cells.length === N) chains.push({ cells, dir, score: axialDistance(c, inCell) + axialDistance(mesh.cells[cells[N - 1]!]!, outCell) });
+      if (cells.length === N) chains.push({ cells, dir, score: cellScore(dFrom, cells[0]!, N > 1 ? dir : -1) + cellScore(dDrop, cells[N - 1]!, N > 1 ? (dir + 3) % 6 : -1) });
     }
   chains.sort((x, y) => x.score - y.score);
   let attempts = 0;
@@ -72,9 +72,10 @@ export function routeCoupledRings(mesh: Mesh, space: RouteSpace, a: CoupledRings
       const shared = chain.cells.slice(0, -1).map((c) => f.gates[c * 6 + chain.dir]!);
       const first = loops[0]!;
       const lastLoop = loops[N - 1]!;
-      for (const gin of first) {
-        if (shared.includes(gin.gate)) continue;
-        for (const gout of lastLoop) {
+      const best = (loopSteps: ResolvedStep[], d: Int32Array) =>
+        loopSteps.filter((st) => !shared.includes(st.gate)).sort((x, y) => gateScore(d, x.gate) - gateScore(d, y.gate)).slice(0, 3);
+      for (const gin of best(first, dFrom)) {
+        for (const gout of best(lastLoop, dDrop)) {
           if (shared.includes(gout.gate) || gout.gate === gin.gate || attempts >= CHAIN_ATTEMPTS) continue;
           const couplers = new Set([gin.gate, ...shared, gout.gate]);
           if (![...couplers].every((g) => space.canSplit(g))) continue;

@@ -27,11 +27,12 @@ export function checkPerimeter(perimeterUnits: number): RouteFailure | undefined
  * Yields ring placements between bus source `sourceIn` (light entering there) and bus target
  * `targetOut`, best first (shortest bus through the coupler). While a placement is yielded its
  * gates are marked in the space; resuming the generator frees them and tries the next.
- * Candidates are coupler gates ranked by bus length, at most `maxCandidates` tried.
+ * Candidates are coupler gates ranked by bus length (plus `bias`, a distance per gate port that
+ * pulls the ring towards a second bus), at most `maxCandidates` tried.
  */
 export function* ringPlacements(
   space: RouteSpace,
-  args: { sourceIn: number; targetOut: number; perimeterUnits: number; budget?: number; maxCandidates?: number },
+  args: { sourceIn: number; targetOut: number; perimeterUnits: number; budget?: number | undefined; maxCandidates?: number; bias?: Int32Array },
 ): Generator<RingPlacement, RouteFailure, undefined> {
   const mesh = space.mesh;
   const dIn = pathDistances(space, [args.sourceIn]);
@@ -47,7 +48,8 @@ export function* ringPlacements(
         const busOut = (g << 2) | (side << 1) | ((busIn & 1) ^ 1);
         const c2 = busOut === args.targetOut ? 0 : linksOn(space, busOut) ? dOut[mesh.link[busOut]!]! : UNREACHABLE;
         if (c2 >= UNREACHABLE || !linksOn(space, busIn ^ 2) || !linksOn(space, busOut ^ 2)) continue;
-        candidates.push({ score: c1 + c2, g, busIn, busOut });
+        const extra = args.bias ? Math.min(...[0, 1, 2, 3].map((k) => args.bias![(g << 2) | k]!)) : 0;
+        candidates.push({ score: c1 + c2 + Math.min(extra, 4 * mesh.cells.length), g, busIn, busOut });
       }
     }
   }

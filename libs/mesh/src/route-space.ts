@@ -13,13 +13,13 @@ export class RouteSpace {
   readonly uses: Uint16Array;
   readonly channel: Uint8Array;
   readonly portUsed: Uint8Array;
-  /** Gates the current request may use (region and dead gates applied). */
+  /** Gates the current request may use (region, dead gates and reserved gates applied). */
   readonly allowed: Uint8Array;
 
   constructor(
     readonly mesh: Mesh,
     circuits: readonly ResolvedCircuit[] = [],
-    options: { region?: ReadonlySet<number> | undefined; ignoreDead?: boolean } = {},
+    options: { region?: ReadonlySet<number> | undefined; ignoreDead?: boolean; reserved?: ReadonlySet<number> } = {},
   ) {
     const n = mesh.gates.length;
     this.state = new Uint8Array(n);
@@ -29,7 +29,7 @@ export class RouteSpace {
     this.allowed = new Uint8Array(n);
     for (const g of mesh.gates) {
       const inRegion = !options.region || g.sideCells.some((c) => c >= 0 && options.region!.has(c));
-      this.allowed[g.index] = inRegion && (options.ignoreDead || !g.dead) ? 1 : 0;
+      this.allowed[g.index] = inRegion && (options.ignoreDead || !g.dead) && !options.reserved?.has(g.index) ? 1 : 0;
     }
     for (const r of circuits) {
       for (const g of r.couplerGates) this.state[g] = SPLIT;

@@ -13,15 +13,17 @@ export type SplitterTreeArgs = { from: number; outputs: readonly { port: number;
 export const TREE_BRANCH_ATTEMPTS = 800;
 
 /**
- * The trunk runs to the output with the longest delay; each other output branches off at a split
- * gate on the trunk. Delays count every gate from the input, split gates included. Split ratios
+ * The trunk runs to the last output; each other output branches off at a split gate on the trunk,
+ * in the order given. Delays count every gate from the input, split gates included. Split ratios
  * give every output the same power (ideal, lossless): the k-th split from the input sends 1/(N-k) to its branch.
  */
 export function routeSplitterTree(mesh: Mesh, space: RouteSpace, a: SplitterTreeArgs): CircuitDraft | RouteFailure {
   const N = a.outputs.length;
   if (N < 2) return routeFailure('invalid-request', 'a splitter tree needs at least two outputs');
   for (const o of a.outputs) if (!Number.isInteger(o.delayUnits) || o.delayUnits < 1) return routeFailure('invalid-request', `branch delay ${o.delayUnits} must be a whole number of units >= 1`);
-  const order = [...a.outputs].sort((x, y) => y.delayUnits - x.delayUnits);
+  // The trunk runs to the last output; the others branch off in the order given, each further along
+  // the trunk than the one before, so branches listed in the order their ports sit on the chip edge never cross.
+  const order = [a.outputs[N - 1]!, ...a.outputs.slice(0, N - 1)];
   const trunkOut = order[0]!;
   const src = mesh.ports[a.from]!.gatePort;
   const trunk = walkOfLength(space, src, [mesh.ports[trunkOut.port]!.gatePort], trunkOut.delayUnits, `trunk to ${mesh.ports[trunkOut.port]!.id}`, a.budget);
@@ -31,11 +33,11 @@ export function routeSplitterTree(mesh: Mesh, space: RouteSpace, a: SplitterTree
   const taken = new Map<number, { port: number; steps: ResolvedStep[] }>();
   let attempts = 0;
   let last: RouteFailure | undefined;
-  const place = (k: number): boolean => {
+  const place = (k: number, after: number): boolean => {
     if (k === order.length) return true;
     const o = order[k]!;
     const tgt = mesh.ports[o.port]!.gatePort;
-    for (let i = 0; i < t.length && attempts < TREE_BRANCH_ATTEMPTS; i++) {
+    for (let i = after + 1; i < t.length && attempts < TREE_BRANCH_ATTEMPTS; i++) {
       const need = o.delayUnits - (i + 1);
       if (need < 0 || taken.has(i)) continue;
       const s = t[i]!;
@@ -49,7 +51,7 @@ export function routeSplitterTree(mesh: Mesh, space: RouteSpace, a: SplitterTree
         if (br.ok) {
           space.useAll(br.steps);
           taken.set(i, { port: o.port, steps: br.steps });
-          if (place(k + 1)) return true;
+          if (place(k + 1, i)) return true;
           taken.delete(i);
           space.releaseAll(br.steps);
         } else last = br;
@@ -59,7 +61,7 @@ export function routeSplitterTree(mesh: Mesh, space: RouteSpace, a: SplitterTree
     }
     return false;
   };
-  if (!place(1)) {
+  if (!place(1, -1)) {
     space.releaseAll(t);
     return routeFailure(attempts >= TREE_BRANCH_ATTEMPTS ? 'search-limit' : 'not-enough-free-area', `splitter tree: the branches cannot all get their delays off the trunk${last ? ` (${last.message})` : ''}`);
   }
