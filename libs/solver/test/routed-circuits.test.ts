@@ -73,3 +73,20 @@ describe('a Mach-Zehnder stage placed by the router with a two-unit arm differen
     expect(min / max).toBeLessThan(((1 - r) / (1 + r)) ** 2 * 1.5);
   });
 });
+
+describe('every single-cell ring the router places on a radius-2 block', () => {
+  it('couples the requested power kappa = 0.1 into the ring, whichever way the bus passes the coupler', () => {
+    // Lossless, ideal gates: the coupler's bus-through power must be 1 - kappa (Yariv 2000: t^2 + kappa^2 = 1).
+    const ideal = meshWithIo({ kind: 'hexagon', radius: 2 }, { ...TECH, lossPerGateDb: 0 }, 2);
+    const wrong: string[] = [];
+    for (let i = 0; i < ideal.ports.length; i++) {
+      for (let j = i + 1; j < ideal.ports.length; j += 3) {
+        const r = placeCircuit(emptyConfiguration(ideal.definition), { id: 'x', kind: 'ring', from: ideal.ports[i]!.id, to: ideal.ports[j]!.id, perimeterUnits: 6, kappa: 0.1 }, ideal);
+        if (!r.ok) continue;
+        const through = Math.hypot(...ringRoundTrip(netlistFromMesh({ mesh: ideal, configuration: r.configuration }), ideal, r.circuit).busThrough) ** 2;
+        if (Math.abs(through - 0.9) > 1e-9) wrong.push(`${ideal.ports[i]!.id} -> ${ideal.ports[j]!.id}: through ${through.toFixed(3)}`);
+      }
+    }
+    expect(wrong).toEqual([]);
+  });
+});
