@@ -1,8 +1,8 @@
 // Type-level guard: every file schema parses into a value the mesh library accepts, so the two cannot drift.
 import { describe, expect, expectTypeOf, it } from 'vitest';
 import type { z } from 'zod';
-import type { Configuration, MeshDefinition, MeshShape, PathStep, TechnologyProfile, GateSetting, Circuit } from '../../../mesh/src/index.js';
-import { circuitSchema, configurationSchema, gateSettingSchema, meshDefinitionSchema, meshShapeSchema, pathStepSchema, technologyProfileSchema } from './index.js';
+import type { Circuit, Configuration, GateSetting, MeshDefinition, MeshShape, PathStep, RouteRequest, TechnologyProfile } from '../../../mesh/src/index.js';
+import { circuitSchema, configurationSchema, gateSettingSchema, meshDefinitionSchema, meshShapeSchema, pathStepSchema, routeRequestSchema, technologyProfileSchema } from './index.js';
 
 describe('mesh file schemas', () => {
   it('infer types assignable to the mesh library types', () => {
@@ -13,6 +13,7 @@ describe('mesh file schemas', () => {
     expectTypeOf<z.infer<typeof gateSettingSchema>>().toExtend<GateSetting>();
     expectTypeOf<z.infer<typeof circuitSchema>>().toExtend<Circuit>();
     expectTypeOf<z.infer<typeof pathStepSchema>>().toExtend<PathStep>();
+    expectTypeOf<z.infer<typeof routeRequestSchema>>().toExtend<RouteRequest>();
   });
   it('rejects a gate id with an unknown direction and names the field', () => {
     const bad = pathStepSchema.safeParse({ gate: 'g(0,0)sw', in: 'a0', out: 'a1' });
