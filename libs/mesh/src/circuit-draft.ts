@@ -26,3 +26,12 @@ export function draftToCircuit(mesh: Mesh, draft: CircuitDraft, meta: { id: stri
   const couplers: CouplerGate[] = draft.couplers.map((c) => ({ gate: mesh.gates[c.gate]!.id, role: c.role, kappa: c.kappa, phaseRad: c.phaseRad }));
   return { id: meta.id, kind: meta.kind, ports, paths, couplers, ...(meta.region ? { region: [...meta.region] } : {}) };
 }
+
+/**
+ * The gate's power cross-coupling that moves `requested` of the power off a path entering at
+ * `inPort` and nominally leaving at `outPort`: the requested value when the nominal traversal is
+ * bar, 1 - requested when it is cross (then "staying on the path" is the cross output).
+ */
+export function crossKappa(inPort: number, outPort: number, requested: number): number {
+  return ((inPort >> 1) & 1) === ((outPort >> 1) & 1) ? requested : 1 - requested;
+}

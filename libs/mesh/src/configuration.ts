@@ -25,7 +25,11 @@ export type CircuitPath = {
 
 export type PathRole = 'bus' | 'ring' | 'arm' | 'branch' | 'feed';
 
-/** A split gate of a circuit (ring coupler, splitter, combiner, ring-to-ring coupler). */
+/**
+ * A split gate of a circuit (ring coupler, splitter, combiner, ring-to-ring coupler). `kappa` is the
+ * gate's power cross-coupling (to the other side), the same value as its gate setting; the router
+ * converts a requested path-to-path coupling k into 1 - k where the paths pass the gate in cross.
+ */
 export type CouplerGate = {
   readonly gate: GateId;
   readonly role: 'ring-coupler' | 'splitter' | 'combiner' | 'ring-ring';

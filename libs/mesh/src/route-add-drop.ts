@@ -1,5 +1,5 @@
 /** Places an add-drop ring: an all-pass ring whose loop carries a second split gate to a drop bus. */
-import { gateTerminal, portTerminal, type CircuitDraft } from './circuit-draft.js';
+import { crossKappa, gateTerminal, portTerminal, type CircuitDraft } from './circuit-draft.js';
 import { legInto, legOutOf } from './legs.js';
 import type { Mesh } from './mesh.js';
 import { pathDistances } from './path-distances.js';
@@ -47,8 +47,8 @@ export function routeAddDrop(mesh: Mesh, space: RouteSpace, a: AddDropArgs): Cir
             return {
               paths,
               couplers: [
-                { gate: p.coupler, role: 'ring-coupler', kappa: a.kappa, phaseRad: 0 },
-                { gate: s.gate, role: 'ring-coupler', kappa: a.dropKappa, phaseRad: 0 },
+                { gate: p.coupler, role: 'ring-coupler', kappa: crossKappa(p.busIn, p.busOut, a.kappa), phaseRad: 0 },
+                { gate: s.gate, role: 'ring-coupler', kappa: crossKappa(s.inPort, s.outPort, a.dropKappa), phaseRad: 0 },
               ],
             };
           }

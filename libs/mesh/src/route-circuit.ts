@@ -1,5 +1,5 @@
 /** Routes one requested circuit on what the other circuits leave free; returns the circuit or a reason. */
-import { draftToCircuit, gateTerminal, portTerminal, type CircuitDraft } from './circuit-draft.js';
+import { crossKappa, draftToCircuit, gateTerminal, portTerminal, type CircuitDraft } from './circuit-draft.js';
 import type { Circuit, CircuitKind } from './configuration.js';
 import type { GateSetting } from './gate-state.js';
 import type { Mesh } from './mesh.js';
@@ -57,7 +57,7 @@ function route(mesh: Mesh, space: RouteSpace, r: RouteRequest, port: Map<string,
           { role: 'bus', from: gateTerminal(c.busOut), to: portTerminal(mesh, p(r.to)), steps: c.legOut },
           { role: 'ring', from: gateTerminal(c.busOut ^ 2), to: gateTerminal(c.busIn ^ 2), steps: c.ring },
         ],
-        couplers: [{ gate: c.coupler, role: 'ring-coupler', kappa: r.kappa, phaseRad: r.phaseRad ?? 0 }],
+        couplers: [{ gate: c.coupler, role: 'ring-coupler', kappa: crossKappa(c.busIn, c.busOut, r.kappa), phaseRad: r.phaseRad ?? 0 }],
       };
     }
     case 'add-drop-ring':

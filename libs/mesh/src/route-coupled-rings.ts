@@ -2,7 +2,7 @@
 import { axialNeighbour } from './axial.js';
 import { pathDistances } from './path-distances.js';
 import { cellFrame } from './cell-frame.js';
-import { gateTerminal, portTerminal, type CircuitDraft, type DraftPath } from './circuit-draft.js';
+import { crossKappa, gateTerminal, portTerminal, type CircuitDraft, type DraftPath } from './circuit-draft.js';
 import { legInto, legOutOf } from './legs.js';
 import { cellId } from './mesh-ids.js';
 import type { Mesh } from './mesh.js';
@@ -115,8 +115,9 @@ export function routeCoupledRings(mesh: Mesh, space: RouteSpace, a: CoupledRings
             ];
             if (a.add !== undefined) paths.push({ role: 'bus', from: portTerminal(mesh, a.add), to: gateTerminal(gout.inPort ^ 2), steps: used[3]! });
             for (const l of loops) paths.push(...segments(l, couplers));
-            const gates = [gin.gate, ...shared, gout.gate];
-            return { paths, couplers: gates.map((g, k) => ({ gate: g, role: k === 0 || k === N ? 'ring-coupler' : 'ring-ring', kappa: a.kappas[k]!, phaseRad: 0 })) };
+            // Ring traversals around their own cell are bar, so the requested kappas are the cross-couplings.
+            const nominal = [gin, ...shared.map((g) => loops.flat().find((st) => st.gate === g)!), gout];
+            return { paths, couplers: nominal.map((st, k) => ({ gate: st.gate, role: k === 0 || k === N ? 'ring-coupler' : 'ring-ring', kappa: crossKappa(st.inPort, st.outPort, a.kappas[k]!), phaseRad: 0 })) };
           }
           for (const u of used) space.releaseAll(u);
           space.releaseAll(steps);

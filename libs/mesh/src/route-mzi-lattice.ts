@@ -1,5 +1,5 @@
 /** Places a Mach-Zehnder stage or a lattice of stages: split gates along a bus, each stage's second arm routed beside it. */
-import { gateTerminal, portTerminal, type CircuitDraft, type DraftPath } from './circuit-draft.js';
+import { crossKappa, gateTerminal, portTerminal, type CircuitDraft, type DraftPath } from './circuit-draft.js';
 import { legBetween } from './legs.js';
 import type { Mesh } from './mesh.js';
 import { pathDistances, UNREACHABLE } from './path-distances.js';
@@ -79,7 +79,7 @@ export function routeMziLattice(mesh: Mesh, space: RouteSpace, a: MziLatticeArgs
           paths.push({ role: 'bus', from: gateTerminal(b[last]!.outPort), to: portTerminal(mesh, a.to), steps: b.slice(last + 1) });
           return {
             paths,
-            couplers: at.map((i, k) => ({ gate: b[i]!.gate, role: k === 0 ? 'splitter' : 'combiner', kappa: a.kappas[k]!, phaseRad: 0 })),
+            couplers: at.map((i, k) => ({ gate: b[i]!.gate, role: k === 0 ? 'splitter' : 'combiner', kappa: crossKappa(b[i]!.inPort, b[i]!.outPort, a.kappas[k]!), phaseRad: 0 })),
           };
         }
         at.pop();
