@@ -9,3 +9,4 @@ export * from './version.js';
 export * from './mesh/index.js';
 export * from './synth/index.js';
 export * from './solver/index.js';
+export * from './team-server/index.js';

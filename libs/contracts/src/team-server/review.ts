@@ -1,0 +1,54 @@
+/** Reviews and comments on a version: request, decide, threaded comments with optional anchors. */
+import { z } from 'zod';
+import { gateIdSchema } from '../mesh/mesh-definition.js';
+
+const login = z.string().trim().min(1).max(80);
+
+/** POST .../review-requests body: the logins of the reviewers. */
+export const requestReviewSchema = z.object({ reviewers: z.array(login).min(1).max(10), message: z.string().max(2000).default('') });
+export type RequestReview = z.infer<typeof requestReviewSchema>;
+
+/** POST .../decision body. */
+export const reviewDecisionSchema = z.object({ decision: z.enum(['approve', 'request_changes']), note: z.string().max(2000).default('') });
+export type ReviewDecision = z.infer<typeof reviewDecisionSchema>;
+
+export const reviewSchema = z.object({
+  id: z.uuid(),
+  versionNumber: z.number().int().positive(),
+  reviewer: z.string(),
+  requestedBy: z.string(),
+  requestedAt: z.string(),
+  decision: z.enum(['approve', 'request_changes']).nullable(),
+  note: z.string(),
+  decidedAt: z.string().nullable(),
+});
+export type Review = z.infer<typeof reviewSchema>;
+
+/** Where a comment points: a gate, or a frequency range (offsets from the reference, Hz). */
+export const commentAnchorSchema = z.union([
+  z.object({ gate: gateIdSchema }).strict(),
+  z
+    .object({ fromHz: z.number().finite(), toHz: z.number().finite() })
+    .strict()
+    .refine((a) => a.toHz >= a.fromHz, { message: 'toHz must be >= fromHz', path: ['toHz'] }),
+]);
+export type CommentAnchor = z.infer<typeof commentAnchorSchema>;
+
+/** POST .../comments body; `@login` in the text mails that member. */
+export const createCommentSchema = z.object({
+  body: z.string().trim().min(1).max(5000),
+  parentId: z.uuid().optional(),
+  anchor: commentAnchorSchema.optional(),
+});
+export type CreateComment = z.infer<typeof createCommentSchema>;
+
+export const commentSchema = z.object({
+  id: z.uuid(),
+  versionNumber: z.number().int().positive(),
+  parentId: z.uuid().nullable(),
+  author: z.string(),
+  body: z.string(),
+  anchor: commentAnchorSchema.nullable(),
+  createdAt: z.string(),
+});
+export type Comment = z.infer<typeof commentSchema>;

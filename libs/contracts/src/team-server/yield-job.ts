@@ -1,0 +1,48 @@
+/** Monte Carlo yield as a background job: start body, job answer, progress events. */
+import { z } from 'zod';
+import { frequencyGridSchema } from '../solver/frequency-grid.js';
+import { maskSchema } from '../synth/mask.js';
+
+/** POST .../yield-jobs body: perturb every gate with seeded normal errors and check the mask. */
+export const startYieldJobSchema = z.object({
+  from: z.string().min(1),
+  to: z.string().min(1),
+  grid: frequencyGridSchema,
+  mask: maskSchema,
+  runs: z.number().int().min(1).max(20_000),
+  seed: z.number().int().min(0).max(2 ** 31 - 1),
+  /** Standard deviation of the internal phase error of each gate, rad. */
+  thetaErrorStdRad: z.number().min(0).max(1),
+  /** Standard deviation of the outer phase error of each gate, rad. */
+  phiErrorStdRad: z.number().min(0).max(1),
+  /** Standard deviation of each 3 dB coupler's angle error, rad. */
+  couplerErrorStdRad: z.number().min(0).max(0.5).default(0),
+});
+export type StartYieldJob = z.infer<typeof startYieldJobSchema>;
+
+export const yieldJobStatusSchema = z.enum(['running', 'done', 'cancelled', 'failed']);
+export type YieldJobStatus = z.infer<typeof yieldJobStatusSchema>;
+
+const spreadSchema = z.object({ mean: z.number(), std: z.number(), min: z.number(), p05: z.number(), p50: z.number(), p95: z.number(), max: z.number() });
+
+export const yieldSummarySchema = z.object({
+  runs: z.number().int(),
+  passed: z.number().int(),
+  yield: z.number(),
+  yieldStdError: z.number(),
+  figures: z.record(z.string(), spreadSchema),
+});
+
+/** A yield job as GET .../yield-jobs/:jobId returns it (and each server-sent `progress` event). */
+export const yieldJobSchema = z.object({
+  id: z.uuid(),
+  versionId: z.uuid(),
+  status: yieldJobStatusSchema,
+  runsDone: z.number().int(),
+  runsTotal: z.number().int(),
+  summary: yieldSummarySchema.nullable(),
+  error: z.string().nullable(),
+  createdBy: z.string(),
+  createdAt: z.string(),
+});
+export type YieldJob = z.infer<typeof yieldJobSchema>;
