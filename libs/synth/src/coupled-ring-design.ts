@@ -28,8 +28,9 @@ export type CoupledRingDesign = {
  * Narrow-band coupled-resonator design (Little et al., J. Lightwave Technol. 15(6), 1997, coupled-mode
  * rules; prototype scaling of Matthaei, Young & Jones 1964, ch. 8): with T = 1 / FSR and
  * dw = 2 pi B, the bus couplers need kappa^2 = T dw / (g0 g1) and T dw / (g_n g_{n+1}), and the field
- * coupling between rings i and i+1 is T dw / (2 sqrt(g_i g_{i+1})).
- * @throws SynthInputError when the band is so wide that a coupler would exceed full coupling.
+ * coupling between rings i and i+1 is T dw / (2 sqrt(g_i g_{i+1})) — used here in their round-trip forms
+ * kappa = 1 - exp(-T dw / (g0 g1)) and k = sin(T dw / (2 sqrt(g_i g_{i+1}))), which reduce to them for narrow bands.
+ * @throws SynthInputError when the band is half the ring FSR or wider, or needs more than full ring-to-ring coupling.
  */
 export function designCoupledRingBandpass(input: CoupledRingInput): CoupledRingDesign {
   const { bandwidthHz, ringFsrHz, order } = input;
@@ -40,18 +41,19 @@ export function designCoupledRingBandpass(input: CoupledRingInput): CoupledRingD
   const g = lowpassPrototype(input.rippleDb === undefined ? { kind: input.kind, order } : { kind: input.kind, order, rippleDb: input.rippleDb });
   const gi = (i: number): number => g[i] as number;
   const tdw = (2 * Math.PI * bandwidthHz) / ringFsrHz;
-  const couplings = [tdw / (gi(0) * gi(1))];
+  // Round-trip forms of the coupled-mode rules: a bus coupler keeps 1 - kappa of the ring energy per round trip,
+  // so T / tau_e = -ln(1 - kappa) (-> kappa for weak coupling); two rings coupled by field k split by
+  // +/- asin(k) per round trip, so mu T = asin(k) (-> k). They keep the rules accurate at wider bands.
+  const external = (g: number): number => 1 - Math.exp(-tdw / g);
+  const couplings = [external(gi(0) * gi(1))];
   const normalised: number[] = [];
   for (let i = 1; i < order; i++) {
-    const field = tdw / (2 * Math.sqrt(gi(i) * gi(i + 1)));
-    couplings.push(field * field);
+    const muT = tdw / (2 * Math.sqrt(gi(i) * gi(i + 1)));
+    if (muT >= Math.PI / 2) throw new SynthInputError(`synth: a ${bandwidthHz} Hz band needs ring-to-ring coupling beyond full coupling; use a narrower band`);
+    couplings.push(Math.sin(muT) ** 2);
     normalised.push(1 / Math.sqrt(gi(i) * gi(i + 1)));
   }
-  couplings.push(tdw / (gi(order) * gi(order + 1)));
-  const worst = Math.max(...couplings);
-  if (worst >= 1) {
-    throw new SynthInputError(`synth: a ${bandwidthHz} Hz band needs a coupler beyond full coupling (kappa = ${worst.toFixed(3)}); use a narrower band or smaller rings`);
-  }
+  couplings.push(external(gi(order) * gi(order + 1)));
   return {
     gValues: g,
     powerCouplings: couplings,

@@ -6,7 +6,7 @@ describe('filterSpecSchema', () => {
     const spec = filterSpecSchema.parse({
       schemaVersion: 1,
       name: 'Ku-band channel',
-      spec: { kind: 'coupled-ring-bandpass', from: 'v(0,0)n/g(0,0)ne', to: 'v(3,0)n/g(3,0)ne', response: 'chebyshev', order: 3, rippleDb: 0.1, bandwidthHz: 1.2e9, centreOffsetHz: 8e9 },
+      spec: { kind: 'coupled-ring-bandpass', from: 'v(0,0)n/g(0,0)ne', to: 'v(3,0)n/g(3,0)ne', through: 'v(4,0)n/g(4,0)ne', response: 'chebyshev', order: 3, rippleDb: 0.1, bandwidthHz: 1.2e9, centreOffsetHz: 8e9 },
       mask: { regions: [{ kind: 'stop', range: { fromHz: 10e9, toHz: 12e9 }, minRejectionDb: 30 }] },
     });
     expect(spec.spec.kind).toBe('coupled-ring-bandpass');

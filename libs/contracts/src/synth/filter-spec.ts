@@ -67,7 +67,10 @@ export const addDropSpecSchema = z.object({
 export const coupledRingSpecSchema = z.object({
   kind: z.literal('coupled-ring-bandpass'),
   from: portIdSchema,
+  /** The filtered (drop) output. */
   to: portIdSchema,
+  /** Where the rest of the light leaves the input bus. */
+  through: portIdSchema,
   response: z.enum(['butterworth', 'chebyshev']),
   order: z.number().int().min(1).max(8),
   rippleDb: positive.max(3).optional(),
