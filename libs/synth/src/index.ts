@@ -52,3 +52,4 @@ export type { Transmission } from './simulate-transmission.js';
 export { verificationOffsets } from './verification-grid.js';
 export { synthesise } from './synthesise.js';
 export type { SynthesiseInput, SynthesisFailure, SynthesisSuccess, Verification } from './synthesise.js';
+export { canonicalLattice, tuneLattice } from './tune-lattice.js';

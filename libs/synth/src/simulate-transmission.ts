@@ -1,6 +1,6 @@
 /** Simulates one input-to-output transmission of a whole configured chip (leakage included) on a frequency list. */
 import type { Configuration, Mesh } from '@hexloom/mesh';
-import { impulseResponse, netlistFromMesh, outputPortIndex, spectrumFromImpulse, type GatePerturbation } from '@hexloom/solver';
+import { impulseResponse, netlistFromMesh, outputPortIndex, spectrumFromImpulse, type GatePerturbation, type ImpulseOptions } from '@hexloom/solver';
 import type { SampledResponse } from './mask-types.js';
 
 export type Transmission = SampledResponse & {
@@ -24,9 +24,11 @@ export function simulateTransmission(input: {
   to: string;
   offsetsHz: readonly number[];
   perturbations?: Readonly<Record<string, GatePerturbation>>;
+  /** Stopping rule of the impulse run (solver defaults when absent). */
+  impulse?: ImpulseOptions;
 }): Transmission {
   const chip = netlistFromMesh({ mesh: input.mesh, configuration: input.configuration, ...(input.perturbations ? { perturbations: input.perturbations } : {}) });
-  const ir = impulseResponse(chip.netlist, input.from);
+  const ir = impulseResponse(chip.netlist, input.from, input.impulse);
   const out = ir.outputs[outputPortIndex(chip.netlist, input.to)];
   if (!out) throw new Error(`synth: the solver returned no output for port ${input.to}`);
   const spectrum = spectrumFromImpulse({ impulse: out, grid: { kind: 'list', offsetsHz: input.offsetsHz }, unitDelayS: chip.unitDelayS, referenceFrequencyHz: chip.referenceFrequencyHz });

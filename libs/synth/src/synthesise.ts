@@ -1,6 +1,7 @@
 /** Specification -> design -> placement on the free part of the chip -> tuning -> simulation -> mask check. */
 import type { FilterSpec } from '@hexloom/contracts';
 import { placeCircuit, routeCircuit, type Circuit, type Configuration, type Mesh, type RouteRequest } from '@hexloom/mesh';
+import type { ImpulseOptions } from '@hexloom/solver';
 import { alignCouplers } from './align-couplers.js';
 import { checkMask, type MaskReport } from './check-mask.js';
 import { chooseDelayUnits } from './delay-design.js';
@@ -10,6 +11,7 @@ import type { RealisationNote } from './realisation-note.js';
 import { responseFigures, type ResponseFigures } from './response-figures.js';
 import { simulateTransmission, type Transmission } from './simulate-transmission.js';
 import { SynthInputError } from './synth-input-error.js';
+import { tuneLattice } from './tune-lattice.js';
 import { tuneLoops, type LoopTuning } from './tune-loops.js';
 import { verificationOffsets } from './verification-grid.js';
 
@@ -27,7 +29,7 @@ export type SynthesisSuccess = {
 
 export type SynthesisFailure = { ok: false; reason: string; message: string; notes: RealisationNote[] };
 
-export type SynthesiseInput = { spec: FilterSpec; mesh: Mesh; configuration: Configuration; circuitId: string };
+export type SynthesiseInput = { spec: FilterSpec; mesh: Mesh; configuration: Configuration; circuitId: string; impulse?: ImpulseOptions };
 
 const failure = (reason: string, message: string, notes: RealisationNote[] = []): SynthesisFailure => ({ ok: false, reason, message, notes });
 
@@ -36,7 +38,7 @@ const failure = (reason: string, message: string, notes: RealisationNote[] = [])
  * spec's region, if any), tunes every loop to the requested centre, then simulates the whole chip and checks the mask.
  * Impossible requests (no route, wrong parity, a band the loss does not allow) come back as `{ ok: false }` with a reason.
  */
-export function synthesise({ spec, mesh, configuration, circuitId }: SynthesiseInput): SynthesisSuccess | SynthesisFailure {
+export function synthesise({ spec, mesh, configuration, circuitId, impulse }: SynthesiseInput): SynthesisSuccess | SynthesisFailure {
   const body = spec.spec;
   const technology = mesh.definition.technology;
   let designed;
@@ -114,9 +116,29 @@ export function synthesise({ spec, mesh, configuration, circuitId }: SynthesiseI
       outputs = [{ from: body.from, to: body.to }, { from: body.from, to: body.through }];
       break;
     }
-    case 'mzi-lattice':
-    case 'allpass-equaliser':
-      return failure('not-placeable-yet', `synth: placing a ${design.kind} on the chip is not available yet; its design is computed (designCircuit)`, notes);
+    case 'mzi-lattice': {
+      if (body.kind !== 'mzi-lattice' && body.kind !== 'transversal') throw new Error('unreachable');
+      const stages = design.lattice.stagePhasesRad.length;
+      // The router takes each coupler's cross-coupling as seen from the bus; the lattice frame puts the long arm
+      // first, which turns the first and last couplers around (see tuneLattice).
+      const kappas = design.lattice.couplerAnglesRad.map((t, k) => (k === 0 || k === stages ? Math.cos(t) ** 2 : Math.sin(t) ** 2));
+      const r = place({ kind: 'mzi-lattice', id: circuitId, from: body.from, to: body.to, lengthDifferencesUnits: Array.from({ length: stages }, () => design.armDifferenceUnits), kappas, ...region });
+      placed = r.ok ? { configuration: tuneLattice(r.configuration, r.circuit, design.lattice, technology.extinctionDb), circuit: r.circuit } : failure(r.reason, r.message, notes);
+      outputs = [{ from: body.from, to: body.to }];
+      break;
+    }
+    case 'allpass-equaliser': {
+      if (body.kind !== 'allpass-equaliser') throw new Error('unreachable');
+      const stages = design.equaliser.stages;
+      if (stages.length !== 1) return failure('not-enough-free-area', `synth: the router places one all-pass ring per bus; an equaliser of ${stages.length} stages needs rings in series on one bus, which the router does not place yet`, notes);
+      const stage = stages[0]!;
+      couplerKappas = [stage.powerCoupling];
+      centres = [stage.resonanceOffsetHz];
+      const r = place({ kind: 'ring', id: circuitId, from: body.from, to: body.to, perimeterUnits: 6, kappa: stage.powerCoupling, ...region });
+      placed = r.ok ? r : failure(r.reason, r.message, notes);
+      outputs = [{ from: body.from, to: body.to }];
+      break;
+    }
   }
   if ('reason' in placed) return placed;
   let { configuration: result, circuit } = placed;
@@ -126,7 +148,7 @@ export function synthesise({ spec, mesh, configuration, circuitId }: SynthesiseI
   circuit = result.circuits.find((c) => c.id === circuit.id) ?? circuit;
   const offsetsHz = verificationOffsets(design, spec.mask.regions as MaskRegion[], unitDelayS);
   const verification = outputs.map(({ from, to }, k) => {
-    const response = simulateTransmission({ mesh, configuration: result, from, to, offsetsHz });
+    const response = simulateTransmission({ mesh, configuration: result, from, to, offsetsHz, ...(impulse ? { impulse } : {}) });
     return { from, to, response, mask: k === 0 ? checkMask(response, spec.mask.regions as MaskRegion[]) : checkMask(response, []), figures: responseFigures(response) };
   });
   return { ok: true, configuration: result, circuit, design, notes, tunings, verification };
