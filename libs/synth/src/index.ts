@@ -53,3 +53,5 @@ export { verificationOffsets } from './verification-grid.js';
 export { synthesise } from './synthesise.js';
 export type { SynthesiseInput, SynthesisFailure, SynthesisSuccess, Verification } from './synthesise.js';
 export { canonicalLattice, tuneLattice } from './tune-lattice.js';
+export { drawPerturbations, gateSensitivities, yieldTrial } from './yield-trial.js';
+export type { GateSensitivity, ToleranceModel, YieldStudy } from './yield-trial.js';
