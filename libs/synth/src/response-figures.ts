@@ -13,6 +13,8 @@ export type ResponseFigures = {
   rejectionDb: number;
   /** Peak-to-peak group delay inside the 3 dB band, ps. */
   delayRippleIn3dBBandPs: number;
+  /** Mean group delay over the whole grid, ps (the delay of a delay line or a delay-set branch). */
+  meanGroupDelayPs: number;
 };
 
 /** Linear interpolation of the frequency where the power crosses `level` between samples i and j. */
@@ -50,5 +52,6 @@ export function responseFigures(response: SampledResponse): ResponseFigures {
     band3dBHz: [lowEdge, highEdge],
     rejectionDb: peakDb - Math.min(...response.powerDb),
     delayRippleIn3dBBandPs: dMax - dMin,
+    meanGroupDelayPs: response.groupDelayPs.reduce((sum, d) => sum + d, 0) / n,
   };
 }

@@ -78,14 +78,30 @@ export function synthesise({ spec, mesh, configuration, circuitId, impulse }: Sy
         minima.push(r.pathLengthsUnits[0] ?? 0);
       }
       const stepUnits = design.stepS / unitDelayS;
-      const base = design.baseS !== undefined ? design.baseS / unitDelayS : Math.max(...minima.map((m, k) => m - k * stepUnits)) + 2;
-      const delays = body.outputs.map((port, k) => {
-        const choice = chooseDelayUnits({ requestedS: (base + k * stepUnits) * unitDelayS, unitDelayS, minUnits: minima[k] as number, toleranceS: design.toleranceS });
-        if (Math.abs(choice.errorS) > 1e-15) notes.push({ quantity: `delay to ${port}`, requested: (base + k * stepUnits) * unitDelayS * 1e12, achieved: choice.achievedS * 1e12, unit: 'ps', note: `${choice.units} units (whole units of the right parity)` });
-        return { port, delayUnits: choice.units };
-      });
-      const r = place({ kind: 'splitter-tree', id: circuitId, from: body.from, outputs: delays, ...region });
-      placed = r.ok ? r : failure(r.reason, r.message, notes);
+      const shortestBase = Math.max(...minima.map((m, k) => m - k * stepUnits));
+      // Branches leave a shared trunk, so each needs more than its own shortest path; add common delay until the
+      // tree fits (every output keeps the same relative delays), unless the spec fixed the base.
+      const extras = design.baseS !== undefined ? [0] : [2, 6, 10, 16, 24, 34, 48];
+      let lastFailure: SynthesisFailure | undefined;
+      placed = failure('not-enough-free-area', 'no splitter tree tried');
+      for (const extra of extras) {
+        const base = design.baseS !== undefined ? design.baseS / unitDelayS : shortestBase + extra;
+        const attemptNotes: RealisationNote[] = [];
+        const delays = body.outputs.map((port, k) => {
+          const choice = chooseDelayUnits({ requestedS: (base + k * stepUnits) * unitDelayS, unitDelayS, minUnits: minima[k] as number, toleranceS: design.toleranceS });
+          if (Math.abs(choice.errorS) > 1e-15) attemptNotes.push({ quantity: `delay to ${port}`, requested: (base + k * stepUnits) * unitDelayS * 1e12, achieved: choice.achievedS * 1e12, unit: 'ps', note: `${choice.units} units (whole units of the right parity)` });
+          return { port, delayUnits: choice.units };
+        });
+        const r = place({ kind: 'splitter-tree', id: circuitId, from: body.from, outputs: delays, ...region });
+        if (r.ok) {
+          notes.push(...attemptNotes);
+          placed = r;
+          lastFailure = undefined;
+          break;
+        }
+        lastFailure = failure(r.reason, r.message, notes);
+      }
+      if (lastFailure) placed = lastFailure;
       outputs = body.outputs.map((to) => ({ from: body.from, to }));
       break;
     }
@@ -147,7 +163,10 @@ export function synthesise({ spec, mesh, configuration, circuitId, impulse }: Sy
   if (centres.length > 0) ({ configuration: result, tunings } = tuneLoops(result, circuit, { offsetsHz: centres, unitDelayS, extinctionDb: technology.extinctionDb }));
   circuit = result.circuits.find((c) => c.id === circuit.id) ?? circuit;
   const offsetsHz = verificationOffsets(design, spec.mask.regions as MaskRegion[], unitDelayS);
-  const verification = outputs.map(({ from, to }, k) => {
+  const portId = (name: string): string => mesh.ports[mesh.portIndex.get(name) ?? -1]?.id ?? name;
+  const verification = outputs.map(({ from: fromName, to: toName }, k) => {
+    const from = portId(fromName);
+    const to = portId(toName);
     const response = simulateTransmission({ mesh, configuration: result, from, to, offsetsHz, ...(impulse ? { impulse } : {}) });
     return { from, to, response, mask: k === 0 ? checkMask(response, spec.mask.regions as MaskRegion[]) : checkMask(response, []), figures: responseFigures(response) };
   });

@@ -1,39 +1,40 @@
-/** The frequency offsets a synthesised circuit is verified on: the mask's ranges, or the band of the design. */
+/** The frequency offsets a synthesised circuit is verified on: the design's natural span plus every mask range. */
 import type { CircuitDesign } from './design-circuit.js';
 import type { MaskRegion } from './mask-types.js';
 
-const POINTS = 801;
+const SPAN_POINTS = 801;
+const REGION_POINTS = 201;
 
-/** 801 offsets spanning every mask range (padded by 10 %), or a span natural for the design when there is no mask. */
-export function verificationOffsets(design: CircuitDesign, regions: readonly MaskRegion[], unitDelayS: number): number[] {
-  let lo: number;
-  let hi: number;
-  if (regions.length > 0) {
-    lo = Math.min(...regions.map((r) => r.range.fromHz));
-    hi = Math.max(...regions.map((r) => r.range.toHz));
-    const pad = 0.1 * (hi - lo);
-    lo -= pad;
-    hi += pad;
-  } else {
-    const unitFsr = 1 / unitDelayS;
-    switch (design.kind) {
-      case 'ring-notch':
-      case 'add-drop': {
-        const fsr = unitFsr / design.perimeterUnits;
-        [lo, hi] = [design.centreOffsetHz - fsr / 2, design.centreOffsetHz + fsr / 2];
-        break;
-      }
-      case 'coupled-ring-bandpass': {
-        const fsr = unitFsr / 6;
-        [lo, hi] = [design.centreOffsetHz - fsr / 2, design.centreOffsetHz + fsr / 2];
-        break;
-      }
-      case 'mzi-lattice':
-        [lo, hi] = [-design.latticeFsrHz / 2, design.latticeFsrHz / 2];
-        break;
-      default:
-        [lo, hi] = [-unitFsr / 16, unitFsr / 16];
+const linspace = (lo: number, hi: number, n: number): number[] => Array.from({ length: n }, (_, i) => lo + ((hi - lo) * i) / (n - 1));
+
+/** The span where the design's response lives: one ring FSR around the centre, a lattice FSR, or a sixteenth of the unit FSR. */
+function naturalSpan(design: CircuitDesign, unitDelayS: number): [number, number] {
+  const unitFsr = 1 / unitDelayS;
+  switch (design.kind) {
+    case 'ring-notch':
+    case 'add-drop': {
+      const fsr = unitFsr / design.perimeterUnits;
+      return [design.centreOffsetHz - fsr / 2, design.centreOffsetHz + fsr / 2];
     }
+    case 'coupled-ring-bandpass':
+      return [design.centreOffsetHz - unitFsr / 12, design.centreOffsetHz + unitFsr / 12];
+    case 'mzi-lattice':
+      return [-design.latticeFsrHz / 2, design.latticeFsrHz / 2];
+    default:
+      return [-unitFsr / 16, unitFsr / 16];
   }
-  return Array.from({ length: POINTS }, (_, i) => lo + ((hi - lo) * i) / (POINTS - 1));
+}
+
+/**
+ * 801 offsets over the natural span (so rejection is measured against the real pass band) and 201 over each
+ * mask range padded by 10 % (so narrow regions are sampled finely), merged in increasing order.
+ */
+export function verificationOffsets(design: CircuitDesign, regions: readonly MaskRegion[], unitDelayS: number): number[] {
+  const [lo, hi] = naturalSpan(design, unitDelayS);
+  const points = linspace(lo, hi, SPAN_POINTS);
+  for (const r of regions) {
+    const pad = 0.1 * (r.range.toHz - r.range.fromHz);
+    points.push(...linspace(r.range.fromHz - pad, r.range.toHz + pad, REGION_POINTS));
+  }
+  return [...new Set(points)].sort((a, b) => a - b);
 }

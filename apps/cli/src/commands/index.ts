@@ -6,8 +6,9 @@ import { registerRouteCommand } from './route.js';
 import { registerCheckCommand } from './check.js';
 import { registerSimulateCommand } from './simulate.js';
 import { registerSparamsCommand } from './sparams.js';
+import { registerSynthCommand } from './synth.js';
 
 /** A function that adds one or more subcommands to the program. */
 export type RegisterCommand = (program: Command) => void;
 
-export const COMMANDS: readonly RegisterCommand[] = [registerVersionCommand, registerMeshCommand, registerRouteCommand, registerCheckCommand, registerSimulateCommand, registerSparamsCommand];
+export const COMMANDS: readonly RegisterCommand[] = [registerVersionCommand, registerMeshCommand, registerRouteCommand, registerCheckCommand, registerSimulateCommand, registerSparamsCommand, registerSynthCommand];

@@ -1,6 +1,6 @@
 /** The specification file format: what a designer asks for, with its mask (see docs/formats.md). */
 import { z } from 'zod';
-import { cellIdSchema, portIdSchema } from '../mesh/mesh-definition.js';
+import { cellIdSchema } from '../mesh/mesh-definition.js';
 import { maskSchema } from './mask.js';
 
 /** Version of the specification file format. */
@@ -8,6 +8,9 @@ export const SPEC_SCHEMA_VERSION = 1;
 
 const finite = z.number().finite();
 const positive = finite.positive();
+
+/** An external port by id (`v(q,r)n/g(q,r)e`) or by its label in the mesh definition. */
+const portIdSchema = z.string().min(1).max(64);
 
 const placement = {
   /** Cells the circuit must stay inside (optional). */
