@@ -2,11 +2,14 @@
 import { type DynamicModule, Global, Module } from '@nestjs/common';
 import { AuditModule } from './audit/audit.module.js';
 import { AuthModule } from './auth/auth.module.js';
+import { ChipsModule } from './chips/chips.module.js';
 import { HEXLOOM_OPTIONS, type ResolvedOptions } from './common/hexloom-options.js';
+import { ConfigurationsModule } from './configurations/configurations.module.js';
 import { DatabaseModule } from './db/database.module.js';
 import type { OpenDatabase } from './db/migrate.js';
 import { HealthModule } from './health/health.module.js';
 import { InvitationsModule } from './invitations/invitations.module.js';
+import { MailModule } from './mail/mail.module.js';
 import { MembersModule } from './members/members.module.js';
 import { TeamsModule } from './teams/teams.module.js';
 
@@ -38,6 +41,9 @@ export class AppModule {
         MembersModule,
         InvitationsModule,
         AuditModule,
+        MailModule,
+        ChipsModule,
+        ConfigurationsModule,
       ],
     };
   }

@@ -38,6 +38,7 @@ async function main(): Promise<void> {
     sessionSecret: sessionSecret(dataDir),
     ...(clientId && clientSecret ? { github: { clientId, clientSecret } } : {}),
     ...(cookieSecure ? { cookieSecure } : {}),
+    ...(process.env['SMTP_URL'] ? { smtpUrl: process.env['SMTP_URL'] } : {}),
     logLevels: ['log', 'error', 'warn'],
   });
   app.enableShutdownHooks();

@@ -14,7 +14,19 @@ export type AuditAction =
   | 'member.removed'
   | 'invitation.created'
   | 'invitation.revoked'
-  | 'invitation.accepted';
+  | 'invitation.accepted'
+  | 'chip.created'
+  | 'chip.updated'
+  | 'calibration.uploaded'
+  | 'configuration.created'
+  | 'configuration.duplicated'
+  | 'version.saved'
+  | 'review.requested'
+  | 'review.decided'
+  | 'comment.created'
+  | 'measurement.uploaded'
+  | 'yield_job.started'
+  | 'yield_job.cancelled';
 
 /** One event to record; `target` is a human-readable name (login, e-mail, slug). */
 export type AuditEntry = {

@@ -8,6 +8,11 @@ const STATUS_OF_KIND: Record<DomainErrorKind, number> = {
   invalid: HttpStatus.BAD_REQUEST,
   unauthorized: HttpStatus.UNAUTHORIZED,
   conflict: HttpStatus.CONFLICT,
+  forbidden: HttpStatus.FORBIDDEN,
+  not_found: HttpStatus.NOT_FOUND,
+  unprocessable: HttpStatus.UNPROCESSABLE_ENTITY,
+  too_large: HttpStatus.PAYLOAD_TOO_LARGE,
+  unsupported: HttpStatus.UNSUPPORTED_MEDIA_TYPE,
 };
 
 const REASON: Record<number, string> = {
@@ -16,10 +21,13 @@ const REASON: Record<number, string> = {
   403: 'Forbidden',
   404: 'Not Found',
   409: 'Conflict',
+  413: 'Payload Too Large',
+  415: 'Unsupported Media Type',
+  422: 'Unprocessable Entity',
   500: 'Internal Server Error',
 };
 
-/** Maps domain errors by kind, Nest HTTP exceptions by status, anything else to a logged 500. */
+/** Maps domain errors by kind (with their extra members), Nest HTTP exceptions by status, anything else to a logged 500. */
 @Catch()
 export class ApiExceptionFilter implements ExceptionFilter {
   private readonly logger = new Logger('ApiExceptionFilter');
@@ -32,7 +40,7 @@ export class ApiExceptionFilter implements ExceptionFilter {
     res.status(body.statusCode).type('application/json').json(body);
   }
 
-  private toApiError(exception: unknown): ApiError {
+  private toApiError(exception: unknown): ApiError & Record<string, unknown> {
     if (exception instanceof DomainError) {
       const statusCode = STATUS_OF_KIND[exception.kind];
       return {
@@ -40,6 +48,7 @@ export class ApiExceptionFilter implements ExceptionFilter {
         error: REASON[statusCode] ?? 'Error',
         message: exception.message,
         ...(exception.issues ? { issues: exception.issues } : {}),
+        ...exception.extra,
       };
     }
     if (exception instanceof HttpException) {

@@ -22,5 +22,7 @@ export function resolveOptions(options: HexloomOptions): ResolvedOptions {
     sessionSecret: options.sessionSecret || randomBytes(32).toString('hex'),
     github,
     cookieSecure: options.cookieSecure ?? publicUrl.startsWith('https://'),
+    smtpUrl: options.smtpUrl || null,
+    mailFrom: options.mailFrom ?? 'Hexloom <hexloom@localhost>',
   };
 }

@@ -5,7 +5,8 @@ import { and, desc, eq, isNull, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
 import { AuditService } from '../audit/audit.service.js';
 import { DATABASE, type Database, type DbExecutor } from '../db/database.js';
-import { invitations, memberships, users } from '../db/schema/index.js';
+import { invitations, memberships, teams, users } from '../db/schema/index.js';
+import { MailService } from '../mail/mail.service.js';
 import { AlreadyMemberError, InvitationAcceptedError, InvitationPendingError } from './invitation-errors.js';
 
 const inviter = alias(users, 'inviter');
@@ -33,6 +34,7 @@ export class InvitationsService {
   constructor(
     @Inject(DATABASE) private readonly db: Database,
     private readonly audit: AuditService,
+    private readonly mail: MailService,
   ) {}
 
   /** Every invitation of the team (pending and accepted), newest first; `invitedBy` is a login. */
@@ -46,9 +48,9 @@ export class InvitationsService {
     return rows.map(toInvitation);
   }
 
-  /** Invites `body.email`; 409 if it is a member's e-mail or already pending. */
+  /** Invites `body.email` and mails it; 409 if it is a member's e-mail or already pending. */
   async create(actor: User, teamId: string, body: CreateInvitation): Promise<Invitation> {
-    return this.db.transaction(async (tx) => {
+    const invitation = await this.db.transaction(async (tx) => {
       const [member] = await tx
         .select({ userId: users.id })
         .from(memberships)
@@ -71,6 +73,15 @@ export class InvitationsService {
       );
       return toInvitation({ ...row, invitedBy: actor.login });
     });
+    const [team] = await this.db.select({ name: teams.name }).from(teams).where(eq(teams.id, teamId));
+    await this.mail.send({
+      teamId,
+      kind: 'invitation',
+      to: [body.email],
+      subject: `${actor.name} invited you to ${team?.name ?? 'a team'} on Hexloom`,
+      text: `${actor.name} (${actor.login}) invited you to join ${team?.name ?? 'their team'} as ${body.role}.\nSign in to Hexloom with this e-mail address to accept.`,
+    });
+    return invitation;
   }
 
   /** Deletes a pending invitation; 404 if unknown in this team, 409 if already accepted. */
