@@ -90,7 +90,6 @@ function bench(rows: number, columns: number, queries: number): string[] {
 }
 
 const header = ['mesh (columns x rows)', 'size', 'build', 'shortest-path queries', 'exact length 1x / 2x / 4x min', 'ring placement (median of 5)', 'heap after build'];
-const rows: string[][] = [bench(8, 12, 1000), bench(30, 30, 1000), bench(60, 60, 1000)];
 process.stdout.write(`| ${header.join(' | ')} |\n|${header.map(() => '---').join('|')}|\n`);
-for (const r of rows) process.stdout.write(`| ${r.join(' | ')} |\n`);
+for (const [r, c] of [[8, 12], [30, 30], [60, 60]] as const) process.stdout.write(`| ${bench(r, c, 1000).join(' | ')} |\n`);
 process.stdout.write(`\nNode ${process.version}, ${new Date().toISOString().slice(0, 10)}\n`);

@@ -9,19 +9,23 @@ import { shortestWalk, type WalkResult } from './walks.js';
 export type PathMetric = 'length' | 'loss';
 
 /**
- * Dijkstra (bidirectional, graphology-shortest-path) from `source:A` to `sink:B`, with arcs the
+ * By loss: Dijkstra (bidirectional, graphology-shortest-path) from `source:A` to `sink:B`, with arcs the
  * space forbids weighted Infinity; this is the shortest-path-on-the-tunable-unit-graph routing
  * formulation for hexagonal meshes (López et al., Opt. Express 28(1):737, 2020). A path that
- * conflicts with itself falls back to the bounded exact-length search.
+ * conflicts with itself falls back to the bounded exact-length search. By length: breadth-first
+ * bounds and the exact-length search at the least length.
  */
 export function shortestByMetric(space: RouteSpace, fromPort: number, toPort: number, metric: PathMetric, what: string): WalkResult {
   const mesh = space.mesh;
+  // By length every arc weighs one unit: a breadth-first search on the index tables gives the same
+  // shortest length as Dijkstra, an order of magnitude faster on large meshes.
+  if (metric === 'length') return shortestWalk(space, mesh.ports[fromPort]!.gatePort, [mesh.ports[toPort]!.gatePort], what);
   const graph = buildPortGraph(mesh);
   const a = mesh.ports[fromPort]!;
   const b = mesh.ports[toPort]!;
   const nodes = bidirectional(graph, `source:${a.id}`, `sink:${b.id}`, (_e, arc) => {
-    if (arc.kind === 'bar' || arc.kind === 'cross') return space.canUse(arc.inPort, arc.outPort) ? (metric === 'length' ? 1 : arc.lossDb + 1e-9) : Infinity;
-    return metric === 'length' ? 0 : arc.lossDb;
+    if (arc.kind === 'bar' || arc.kind === 'cross') return space.canUse(arc.inPort, arc.outPort) ? arc.lossDb + 1e-9 : Infinity;
+    return arc.lossDb;
   });
   if (nodes && nodes.length > 0) {
     const steps: ResolvedStep[] = [];
