@@ -3,7 +3,7 @@ import { gateKappa, type Configuration, type GateSetting, type Mesh } from '@hex
 import type { GateEnd, GateNetwork } from './gate-network.js';
 import { compileGateNetwork } from './gate-network.js';
 import type { GatePerturbation } from './gate-transfer.js';
-import { gateTransfer, thetaForKappa } from './gate-transfer.js';
+import { gateTransfer, thetaForKappa, transposeTransfer } from './gate-transfer.js';
 import type { Netlist } from './netlist.js';
 import { NetlistError } from './netlist.js';
 import { unitDelayS } from './unit-delay.js';
@@ -23,7 +23,39 @@ export type MeshNetlist = {
   referenceFrequencyHz: number;
   /** Port names of the netlist are mesh port ids; labels map here to ids. */
   portIdOf: ReadonlyMap<string, string>;
+  /**
+   * The same chip with other per-gate errors on the named gates (replacing any given when it was built), without
+   * rebuilding the netlist: only those gates' stages are recomputed (for Monte Carlo runs).
+   */
+  withPerturbations: (perturbations: Readonly<Record<string, GatePerturbation>>) => Netlist;
 };
+
+/**
+ * Copies the netlist with new transfers for some gates. Gate i owns stages 2i (end 0 -> 1) and 2i + 1 (back,
+ * transposed); a boundary bend scales the rows of the stage that feeds it, which the compiled transfer already
+ * carries, so each row keeps the ratio of compiled to unscaled magnitude.
+ */
+function patchGates(netlist: Netlist, gates: readonly { id: string; transfer: Float64Array }[], mesh: Mesh, transferOf: (i: number) => Float64Array, ids: readonly string[]): Netlist {
+  const transfers = Float64Array.from(netlist.transfers);
+  for (const id of ids) {
+    const i = mesh.gateIndex.get(id);
+    if (i === undefined) throw new NetlistError(`netlist: perturbation names gate ${id}, which is not a gate of this mesh`);
+    const base = gates[i]!.transfer;
+    const next = transferOf(i);
+    [next, transposeTransfer(next)].forEach((t, direction) => {
+      const baseT = direction === 0 ? base : transposeTransfer(base);
+      const offset = 8 * (2 * i + direction);
+      for (const row of [0, 1]) {
+        const k = 4 * row;
+        const unscaled = Math.hypot(baseT[k]!, baseT[k + 1]!, baseT[k + 2]!, baseT[k + 3]!);
+        const compiled = Math.hypot(transfers[offset + k]!, transfers[offset + k + 1]!, transfers[offset + k + 2]!, transfers[offset + k + 3]!);
+        const scale = unscaled > 0 ? compiled / unscaled : 1;
+        for (let c = 0; c < 4; c++) transfers[offset + k + c] = t[k + c]! * scale;
+      }
+    });
+  }
+  return { ...netlist, transfers };
+}
 
 /**
  * Every gate of the mesh becomes a gate of the network: configured gates in their state (bar, cross or
@@ -42,18 +74,18 @@ export function netlistFromMesh({ mesh, configuration, perturbations = {} }: Mes
   for (const id of Object.keys(perturbations)) {
     if (!mesh.gateIndex.has(id)) throw new NetlistError(`netlist: perturbation names gate ${id}, which is not a gate of this mesh`);
   }
-  const gates = mesh.gates.map((g) => {
+  const transferOf = (g: Mesh['gates'][number], perturbation: GatePerturbation | undefined) => {
     const setting = settings.get(g.id);
     const kappa = gateKappa(setting && !g.dead ? setting : { state: configuration.parkedState });
-    const transfer = gateTransfer({
+    return gateTransfer({
       thetaRad: thetaForKappa(kappa),
       phiRad: setting?.phaseRad ?? 0,
       lossDb: g.lossDb,
       extinctionDb: tech.extinctionDb,
-      ...perturbations[g.id],
+      ...perturbation,
     });
-    return { id: g.id, transfer };
-  });
+  };
+  const gates = mesh.gates.map((g) => ({ id: g.id, transfer: transferOf(g, perturbations[g.id]) }));
   const endOf = (p: number): GateEnd => {
     const gate = mesh.gates[p >> 2];
     if (!gate) throw new NetlistError(`netlist: gate port ${p} is outside the mesh`);
@@ -75,9 +107,11 @@ export function netlistFromMesh({ mesh, configuration, perturbations = {} }: Mes
     const port = mesh.ports[index];
     if (port) portIdOf.set(name, port.id);
   }
+  const netlist = compileGateNetwork(network);
   return {
-    netlist: compileGateNetwork(network),
+    netlist,
     network,
+    withPerturbations: (extra) => patchGates(netlist, gates, mesh, (i) => transferOf(mesh.gates[i]!, extra[mesh.gates[i]!.id]), Object.keys(extra)),
     unitDelayS: unitDelayS({ unitLengthUm: tech.unitLengthUm, groupIndex: tech.groupIndex }),
     referenceFrequencyHz: tech.referenceFrequencyHz,
     portIdOf,

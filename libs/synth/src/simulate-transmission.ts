@@ -1,6 +1,6 @@
 /** Simulates one input-to-output transmission of a whole configured chip (leakage included) on a frequency list. */
 import type { Configuration, Mesh } from '@hexloom/mesh';
-import { impulseResponse, netlistFromMesh, outputPortIndex, spectrumFromImpulse, type GatePerturbation, type ImpulseOptions } from '@hexloom/solver';
+import { impulseResponse, netlistFromMesh, outputPortIndex, spectrumFromImpulse, type GatePerturbation, type ImpulseOptions, type MeshNetlist, type Netlist } from '@hexloom/solver';
 import type { SampledResponse } from './mask-types.js';
 
 export type Transmission = SampledResponse & {
@@ -28,8 +28,13 @@ export function simulateTransmission(input: {
   impulse?: ImpulseOptions;
 }): Transmission {
   const chip = netlistFromMesh({ mesh: input.mesh, configuration: input.configuration, ...(input.perturbations ? { perturbations: input.perturbations } : {}) });
-  const ir = impulseResponse(chip.netlist, input.from, input.impulse);
-  const out = ir.outputs[outputPortIndex(chip.netlist, input.to)];
+  return transmissionOf(chip, chip.netlist, input);
+}
+
+/** The same on an already compiled chip (and, for Monte Carlo runs, a perturbed copy of its netlist). */
+export function transmissionOf(chip: MeshNetlist, netlist: Netlist, input: { from: string; to: string; offsetsHz: readonly number[]; impulse?: ImpulseOptions }): Transmission {
+  const ir = impulseResponse(netlist, input.from, input.impulse);
+  const out = ir.outputs[outputPortIndex(netlist, input.to)];
   if (!out) throw new Error(`synth: the solver returned no output for port ${input.to}`);
   const spectrum = spectrumFromImpulse({ impulse: out, grid: { kind: 'list', offsetsHz: input.offsetsHz }, unitDelayS: chip.unitDelayS, referenceFrequencyHz: chip.referenceFrequencyHz });
   const powerDb = Array.from(spectrum.re, (re, i) => 10 * Math.log10(Math.max(re * re + (spectrum.im[i] as number) ** 2, 1e-30)));

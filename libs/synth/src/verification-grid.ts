@@ -29,12 +29,15 @@ function naturalSpan(design: CircuitDesign, unitDelayS: number): [number, number
  * 801 offsets over the natural span (so rejection is measured against the real pass band) and 201 over each
  * mask range padded by 10 % (so narrow regions are sampled finely), merged in increasing order.
  */
-export function verificationOffsets(design: CircuitDesign, regions: readonly MaskRegion[], unitDelayS: number): number[] {
+export function verificationOffsets(design: CircuitDesign, regions: readonly MaskRegion[], unitDelayS: number, density: { spanPoints: number; regionPoints: number } = { spanPoints: SPAN_POINTS, regionPoints: REGION_POINTS }): number[] {
   const [lo, hi] = naturalSpan(design, unitDelayS);
-  const points = linspace(lo, hi, SPAN_POINTS);
+  const points = linspace(lo, hi, density.spanPoints);
   for (const r of regions) {
     const pad = 0.1 * (r.range.toHz - r.range.fromHz);
-    points.push(...linspace(r.range.fromHz - pad, r.range.toHz + pad, REGION_POINTS));
+    points.push(...linspace(r.range.fromHz - pad, r.range.toHz + pad, density.regionPoints));
   }
   return [...new Set(points)].sort((a, b) => a - b);
 }
+
+/** The coarser grid of Monte Carlo runs: 161 points over the natural span and 41 over each mask range. */
+export const MONTE_CARLO_DENSITY = { spanPoints: 161, regionPoints: 41 };

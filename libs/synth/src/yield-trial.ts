@@ -6,7 +6,8 @@ import type { MaskRegion } from './mask-types.js';
 import type { MonteCarloRun } from './monte-carlo.js';
 import { responseFigures } from './response-figures.js';
 import type { RandomStream } from './seeded-normal.js';
-import { simulateTransmission } from './simulate-transmission.js';
+import { netlistFromMesh } from '@hexloom/solver';
+import { simulateTransmission, transmissionOf } from './simulate-transmission.js';
 
 /** Standard deviations of the fabrication and drive errors of one gate. */
 export type ToleranceModel = {
@@ -25,6 +26,9 @@ export type YieldStudy = {
   mask: readonly MaskRegion[];
   tolerance: ToleranceModel;
 };
+
+/** Monte Carlo runs stop once -120 dB of the launched energy is left in the mesh, far below any mask (common practice). */
+export const MONTE_CARLO_IMPULSE = { energyTolerance: 1e-12 };
 
 /** Gates the configuration sets (idle gates keep their parked state; their errors matter far less). */
 const usedGates = (configuration: Configuration): string[] => configuration.gates.map((g) => g.gate);
@@ -46,9 +50,10 @@ export function drawPerturbations(gates: readonly string[], tolerance: Tolerance
 /** A trial for runMonteCarloChunk: simulate the perturbed chip and report mask pass and the quoted figures. */
 export function yieldTrial(study: YieldStudy): (random: RandomStream) => MonteCarloRun {
   const gates = usedGates(study.configuration);
+  const chip = netlistFromMesh({ mesh: study.mesh, configuration: study.configuration });
   return (random) => {
     const perturbations = drawPerturbations(gates, study.tolerance, random);
-    const response = simulateTransmission({ mesh: study.mesh, configuration: study.configuration, from: study.from, to: study.to, offsetsHz: study.offsetsHz, perturbations });
+    const response = transmissionOf(chip, chip.withPerturbations(perturbations), { from: study.from, to: study.to, offsetsHz: study.offsetsHz, impulse: MONTE_CARLO_IMPULSE });
     const mask = checkMask(response, study.mask);
     const figures = responseFigures(response);
     return {

@@ -7,8 +7,9 @@ import { registerCheckCommand } from './check.js';
 import { registerSimulateCommand } from './simulate.js';
 import { registerSparamsCommand } from './sparams.js';
 import { registerSynthCommand } from './synth.js';
+import { registerYieldCommand } from './yield.js';
 
 /** A function that adds one or more subcommands to the program. */
 export type RegisterCommand = (program: Command) => void;
 
-export const COMMANDS: readonly RegisterCommand[] = [registerVersionCommand, registerMeshCommand, registerRouteCommand, registerCheckCommand, registerSimulateCommand, registerSparamsCommand, registerSynthCommand];
+export const COMMANDS: readonly RegisterCommand[] = [registerVersionCommand, registerMeshCommand, registerRouteCommand, registerCheckCommand, registerSimulateCommand, registerSparamsCommand, registerSynthCommand, registerYieldCommand];
