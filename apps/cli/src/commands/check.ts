@@ -1,8 +1,7 @@
 /** `hexloom check`: lists every violation of a configuration as JSON (or one line each with --text). */
 import type { Command } from 'commander';
-import { buildMesh, checkConfiguration } from '@hexloom/mesh';
 import { CliError } from '../cli-error.js';
-import { loadConfiguration, meshErrors } from './mesh.js';
+import { loadConfiguration, loadMeshLib, meshErrors } from './mesh.js';
 
 /** Exit code when the configuration has violations. */
 export const CHECK_FAILED_EXIT_CODE = 3;
@@ -13,7 +12,8 @@ export function registerCheckCommand(program: Command): void {
     .description('check a configuration: waveguides used twice, inconsistent states, dead gates, ports used twice, broken circuits')
     .argument('<configuration>', 'configuration JSON file')
     .option('--text', 'print one line per violation instead of JSON')
-    .action((path: string, o: { text?: boolean }) => {
+    .action(async (path: string, o: { text?: boolean }) => {
+      const { buildMesh, checkConfiguration } = await loadMeshLib();
       const configuration = loadConfiguration(path);
       const result = meshErrors(() => checkConfiguration(buildMesh(configuration.mesh), configuration));
       if (o.text) process.stdout.write(result.ok ? 'ok: no violations\n' : result.violations.map((v) => `${v.code}: ${v.message}\n`).join(''));

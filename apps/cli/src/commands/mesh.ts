@@ -3,7 +3,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import type { Command } from 'commander';
 import type { z } from 'zod';
 import { configurationSchema, meshDefinitionSchema, meshShapeSchema, technologyProfileSchema } from '@hexloom/contracts';
-import { emptyConfiguration, makeMeshDefinition, MeshError, type Configuration, type IoPreset, type MeshShape, type TechnologyProfile } from '@hexloom/mesh';
+import type { Configuration, IoPreset, MeshShape, TechnologyProfile } from '@hexloom/mesh';
 import { CliError } from '../cli-error.js';
 
 /** Placeholder technology used when no --technology file is given (invented demo figures, not a real process). */
@@ -37,6 +37,9 @@ export function parseJson<T extends z.ZodType>(raw: unknown, schema: T, what: st
   return r.data;
 }
 
+/** The mesh library, loaded on first use so that other commands start fast. */
+export const loadMeshLib = () => import('@hexloom/mesh');
+
 /** Loads a configuration file, or a mesh definition file as an empty configuration (idle gates parked in bar). */
 export function loadConfiguration(path: string): Configuration {
   let raw: unknown;
@@ -45,7 +48,8 @@ export function loadConfiguration(path: string): Configuration {
   } catch (error) {
     throw new CliError(`cannot read configuration ${path}: ${(error as Error).message}`);
   }
-  if (raw !== null && typeof raw === 'object' && !('mesh' in raw)) return emptyConfiguration(parseJson(raw, meshDefinitionSchema, `mesh definition ${path}`));
+  if (raw !== null && typeof raw === 'object' && !('mesh' in raw))
+    return { schemaVersion: 1, mesh: parseJson(raw, meshDefinitionSchema, `mesh definition ${path}`), parkedState: 'bar', gates: [], circuits: [] };
   return parseJson(raw, configurationSchema, `configuration ${path}`);
 }
 
@@ -56,12 +60,12 @@ export function writeJson(value: unknown, out: string | undefined): void {
   else process.stdout.write(text);
 }
 
-/** Maps a MeshError (bad id, bad shape) to a one-line CLI error. */
+/** Maps a MeshError (bad id, bad shape; its stable name is `MeshError`) to a one-line CLI error. */
 export function meshErrors<T>(run: () => T): T {
   try {
     return run();
   } catch (error) {
-    if (error instanceof MeshError) throw new CliError(error.message);
+    if (error instanceof Error && error.name === 'MeshError') throw new CliError(error.message);
     throw error;
   }
 }
@@ -82,7 +86,8 @@ export function registerMeshCommand(program: Command): void {
     .option('--dead <gates>', 'comma-separated ids of dead gates, e.g. g(2,1)e,g(3,3)nw')
     .option('--technology <file>', 'JSON technology profile (default: a placeholder profile)')
     .option('-o, --out <file>', 'write to a file instead of stdout')
-    .action((o: MeshOptions) => {
+    .action(async (o: MeshOptions) => {
+      const { makeMeshDefinition } = await loadMeshLib();
       const int = (v: string, what: string) => {
         const n = Number(v);
         if (!Number.isInteger(n)) throw new CliError(`${what} must be a whole number, got "${v}"`);

@@ -2,9 +2,8 @@
 import { readFileSync } from 'node:fs';
 import type { Command } from 'commander';
 import { routeRequestSchema } from '@hexloom/contracts';
-import { buildMesh, placeCircuit, removeCircuit } from '@hexloom/mesh';
 import { CliError } from '../cli-error.js';
-import { loadConfiguration, meshErrors, parseJson, writeJson } from './mesh.js';
+import { loadConfiguration, loadMeshLib, meshErrors, parseJson, writeJson } from './mesh.js';
 
 /** Exit code when a request cannot be placed (the reason is printed as JSON). */
 export const ROUTE_FAILED_EXIT_CODE = 2;
@@ -20,7 +19,8 @@ export function registerRouteCommand(program: Command): void {
     .option('--request <json>', 'the route request as inline JSON instead of a file')
     .option('--remove <circuit>', 'remove this circuit instead of adding one')
     .option('-o, --out <file>', 'write the configuration to a file instead of stdout')
-    .action((configurationPath: string, requestPath: string | undefined, o: RouteOptions) => {
+    .action(async (configurationPath: string, requestPath: string | undefined, o: RouteOptions) => {
+      const { buildMesh, placeCircuit, removeCircuit } = await loadMeshLib();
       const configuration = loadConfiguration(configurationPath);
       const mesh = meshErrors(() => buildMesh(configuration.mesh));
       if (o.remove) {
