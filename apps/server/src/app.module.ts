@@ -2,15 +2,19 @@
 import { type DynamicModule, Global, Module } from '@nestjs/common';
 import { AuditModule } from './audit/audit.module.js';
 import { AuthModule } from './auth/auth.module.js';
+import { BenchModule } from './bench/bench.module.js';
 import { ChipsModule } from './chips/chips.module.js';
 import { HEXLOOM_OPTIONS, type ResolvedOptions } from './common/hexloom-options.js';
+import { ComputeModule } from './compute/compute.module.js';
 import { ConfigurationsModule } from './configurations/configurations.module.js';
 import { DatabaseModule } from './db/database.module.js';
 import type { OpenDatabase } from './db/migrate.js';
 import { HealthModule } from './health/health.module.js';
 import { InvitationsModule } from './invitations/invitations.module.js';
 import { MailModule } from './mail/mail.module.js';
+import { MeasurementsModule } from './measurements/measurements.module.js';
 import { MembersModule } from './members/members.module.js';
+import { ReviewsModule } from './reviews/reviews.module.js';
 import { TeamsModule } from './teams/teams.module.js';
 
 /** Makes the resolved options injectable everywhere. */
@@ -44,6 +48,10 @@ export class AppModule {
         MailModule,
         ChipsModule,
         ConfigurationsModule,
+        ReviewsModule,
+        ComputeModule,
+        BenchModule,
+        MeasurementsModule,
       ],
     };
   }

@@ -15,6 +15,9 @@ const STATUS_OF_KIND: Record<DomainErrorKind, number> = {
   unsupported: HttpStatus.UNSUPPORTED_MEDIA_TYPE,
 };
 
+/** Typed errors of the computing libraries (stable names); their message names the bad value, so they are 422s. */
+const LIBRARY_ERRORS = new Set(['MeshError', 'NetlistError', 'SolverInputError', 'SynthInputError', 'BenchInputError', 'SpectrumFileError']);
+
 const REASON: Record<number, string> = {
   400: 'Bad Request',
   401: 'Unauthorized',
@@ -27,7 +30,7 @@ const REASON: Record<number, string> = {
   500: 'Internal Server Error',
 };
 
-/** Maps domain errors by kind (with their extra members), Nest HTTP exceptions by status, anything else to a logged 500. */
+/** Maps domain errors by kind (with their extra members), library input errors to 422, Nest HTTP exceptions by status, anything else to a logged 500. */
 @Catch()
 export class ApiExceptionFilter implements ExceptionFilter {
   private readonly logger = new Logger('ApiExceptionFilter');
@@ -50,6 +53,9 @@ export class ApiExceptionFilter implements ExceptionFilter {
         ...(exception.issues ? { issues: exception.issues } : {}),
         ...exception.extra,
       };
+    }
+    if (exception instanceof Error && LIBRARY_ERRORS.has(exception.name)) {
+      return { statusCode: 422, error: REASON[422] ?? 'Error', message: exception.message };
     }
     if (exception instanceof HttpException) {
       const statusCode = exception.getStatus();

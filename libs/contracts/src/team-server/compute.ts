@@ -5,9 +5,13 @@ import { routeRequestSchema } from '../mesh/route-request.js';
 import { frequencyGridSchema } from '../solver/frequency-grid.js';
 import { filterSpecSchema } from '../synth/filter-spec.js';
 import { maskSchema } from '../synth/mask.js';
+import { circuitSpecSchema } from './configuration-version.js';
 
 const circuitIdSchema = z.string().regex(/^[A-Za-z][A-Za-z0-9_-]{0,63}$/, 'a circuit id: a letter, then letters, digits, _ or -');
 const portRef = z.string().min(1).max(80);
+
+/** What the synthesiser had to change to fit whole unit lengths. */
+export const realisationNoteSchema = z.object({ quantity: z.string(), requested: z.number().nullable(), achieved: z.number(), unit: z.string(), note: z.string() });
 
 /** A proposed new content (not saved: save it with POST .../versions and the version it was based on). */
 export const proposalSchema = z.discriminatedUnion('ok', [
@@ -16,9 +20,15 @@ export const proposalSchema = z.discriminatedUnion('ok', [
     basedOnVersion: z.number().int().positive(),
     content: configurationSchema,
     circuit: circuitSchema.nullable(),
-    notes: z.array(z.string()),
+    notes: z.array(realisationNoteSchema),
+    /** Synthesis only: the design numbers, and per output the mask report and figures of the whole-chip simulation. */
+    design: z.record(z.string(), z.unknown()).nullable(),
+    verification: z.array(z.object({ from: z.string(), to: z.string(), pass: z.boolean(), figures: z.record(z.string(), z.number()) })),
+    /** Figures and specs to save with the version (the base version's, updated for this change). */
+    figures: z.record(z.string(), z.record(z.string(), z.number())),
+    specs: z.array(circuitSpecSchema),
   }),
-  z.object({ ok: z.literal(false), reason: z.string(), message: z.string() }),
+  z.object({ ok: z.literal(false), reason: z.string(), message: z.string(), notes: z.array(realisationNoteSchema) }),
 ]);
 export type Proposal = z.infer<typeof proposalSchema>;
 
@@ -29,6 +39,10 @@ export type SynthesiseBody = z.infer<typeof synthesiseBodySchema>;
 /** POST .../circuits body. */
 export const placeCircuitBodySchema = z.object({ request: routeRequestSchema });
 export type PlaceCircuitBody = z.infer<typeof placeCircuitBodySchema>;
+
+/** POST .../circuits/:circuitId/reroute body: a new request (its id must be the circuit's), or none to re-synthesise from the saved spec. */
+export const rerouteCircuitBodySchema = z.object({ request: routeRequestSchema.optional() });
+export type RerouteCircuitBody = z.infer<typeof rerouteCircuitBodySchema>;
 
 /** POST .../simulate body: ports by id or label, a grid (span or one FSR). */
 export const simulateBodySchema = z.object({ from: portRef, to: portRef, grid: frequencyGridSchema });

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { frequencyGridSchema } from '../solver/frequency-grid.js';
 import { maskSchema } from '../synth/mask.js';
 
-/** POST .../yield-jobs body: perturb every gate with seeded normal errors and check the mask. */
+/** POST .../yield-jobs body: perturb every used gate with seeded normal errors and check the mask. */
 export const startYieldJobSchema = z.object({
   from: z.string().min(1),
   to: z.string().min(1),
@@ -11,12 +11,10 @@ export const startYieldJobSchema = z.object({
   mask: maskSchema,
   runs: z.number().int().min(1).max(20_000),
   seed: z.number().int().min(0).max(2 ** 31 - 1),
-  /** Standard deviation of the internal phase error of each gate, rad. */
-  thetaErrorStdRad: z.number().min(0).max(1),
-  /** Standard deviation of the outer phase error of each gate, rad. */
-  phiErrorStdRad: z.number().min(0).max(1),
-  /** Standard deviation of each 3 dB coupler's angle error, rad. */
-  couplerErrorStdRad: z.number().min(0).max(0.5).default(0),
+  /** Standard deviation of each 3 dB coupler's splitting-angle error, rad. */
+  couplerSigmaRad: z.number().min(0).max(0.5),
+  /** Standard deviation of the internal and outer phase errors of each gate, rad. */
+  phaseSigmaRad: z.number().min(0).max(1),
 });
 export type StartYieldJob = z.infer<typeof startYieldJobSchema>;
 

@@ -1,0 +1,140 @@
+/** Monte Carlo yield jobs: chunks run in a piscina worker pool, progress in the database, cancel by abort. */
+import { Inject, Injectable, Logger, NotFoundException, type OnApplicationShutdown } from '@nestjs/common';
+import type { StartYieldJob, User, YieldJob } from '@hexloom/contracts';
+import { planMonteCarlo, summariseMonteCarlo, type MonteCarloRun } from '@hexloom/synth';
+import { and, eq } from 'drizzle-orm';
+import { Piscina } from 'piscina';
+import { AuditService } from '../audit/audit.service.js';
+import { buildChipMesh } from '../chips/chips.service.js';
+import { ConfigurationsService, type VersionRef } from '../configurations/configurations.service.js';
+import { DATABASE, type Database } from '../db/database.js';
+import { loginMap } from '../db/login-map.js';
+import { yieldJobs, type YieldJobRow } from '../db/schema/index.js';
+import { resolvePort } from './resolve-port.js';
+import { SimulationService } from './simulation.service.js';
+import type { YieldChunkTask } from './yield-chunk.worker.js';
+
+/** Progress is reported after each chunk; about this many chunks per job. */
+const CHUNKS_PER_JOB = 20;
+const THREADS = 2;
+
+/** The worker file next to this module (.ts under the test runner, .js when built); tsx loads either. */
+const WORKER_FILE = new URL(`./yield-chunk.worker${import.meta.url.endsWith('.ts') ? '.ts' : '.js'}`, import.meta.url).href;
+
+/** Yield job operations. */
+@Injectable()
+export class YieldJobsService implements OnApplicationShutdown {
+  private readonly logger = new Logger('YieldJobsService');
+  private pool: Piscina | null = null;
+  private readonly running = new Map<string, AbortController>();
+
+  constructor(
+    @Inject(DATABASE) private readonly db: Database,
+    private readonly configurations: ConfigurationsService,
+    private readonly simulation: SimulationService,
+    private readonly audit: AuditService,
+  ) {}
+
+  /** Starts a study of one version and returns at once; the chunks run in worker threads. */
+  async start(actor: User, teamId: string, configurationId: string, number: number, body: StartYieldJob): Promise<YieldJob> {
+    const ref = await this.configurations.findVersionOrFail(teamId, configurationId, number);
+    const mesh = buildChipMesh(ref.version.content.mesh);
+    const from = resolvePort(mesh, body.from, 'from');
+    const to = resolvePort(mesh, body.to, 'to');
+    const offsetsHz = this.simulation.offsets(ref.version.content, body.grid);
+    const chunks = planMonteCarlo({ runs: body.runs, seed: body.seed, chunkSize: Math.max(1, Math.ceil(body.runs / CHUNKS_PER_JOB)) });
+    const row = await this.db.transaction(async (tx) => {
+      const [inserted] = await tx.insert(yieldJobs).values({ versionId: ref.version.id, request: body, runsTotal: body.runs, createdBy: actor.id }).returning();
+      if (!inserted) throw new Error('YieldJobsService.start: insert returned no row');
+      await this.audit.record(
+        { action: 'yield_job.started', teamId, actorId: actor.id, target: `${ref.configuration.name} v${number}`, detail: { jobId: inserted.id, runs: body.runs, seed: body.seed } },
+        tx,
+      );
+      return inserted;
+    });
+    const abort = new AbortController();
+    this.running.set(row.id, abort);
+    const base = { content: ref.version.content, from, to, offsetsHz, mask: body.mask.regions, tolerance: { couplerSigmaRad: body.couplerSigmaRad, phaseSigmaRad: body.phaseSigmaRad } };
+    void this.run(row.id, chunks.map((chunk) => ({ ...base, chunk })), abort.signal);
+    return (await this.toJobs([row]))[0] as YieldJob;
+  }
+
+  /** Job `jobId` of the version, or 404. */
+  async get(teamId: string, configurationId: string, number: number, jobId: string): Promise<YieldJob> {
+    const ref = await this.configurations.findVersionOrFail(teamId, configurationId, number);
+    return (await this.toJobs([await this.rowOrFail(ref, jobId)]))[0] as YieldJob;
+  }
+
+  /** Cancels a running job (a finished one is left as it is) and returns it. */
+  async cancel(actor: User, teamId: string, configurationId: string, number: number, jobId: string): Promise<YieldJob> {
+    const ref = await this.configurations.findVersionOrFail(teamId, configurationId, number);
+    const row = await this.rowOrFail(ref, jobId);
+    if (row.status === 'running') {
+      this.running.get(jobId)?.abort();
+      await this.db.transaction(async (tx) => {
+        await tx.update(yieldJobs).set({ status: 'cancelled' }).where(and(eq(yieldJobs.id, jobId), eq(yieldJobs.status, 'running')));
+        await this.audit.record({ action: 'yield_job.cancelled', teamId, actorId: actor.id, target: `${ref.configuration.name} v${number}`, detail: { jobId } }, tx);
+      });
+    }
+    return this.get(teamId, configurationId, number, jobId);
+  }
+
+  async onApplicationShutdown(): Promise<void> {
+    for (const abort of this.running.values()) abort.abort();
+    this.running.clear();
+    await this.pool?.destroy();
+    this.pool = null;
+  }
+
+  private async run(jobId: string, tasks: YieldChunkTask[], signal: AbortSignal): Promise<void> {
+    const runs: MonteCarloRun[] = [];
+    try {
+      this.pool ??= new Piscina({ filename: WORKER_FILE, maxThreads: THREADS, minThreads: 0, idleTimeout: 5_000, execArgv: ['--import', 'tsx'] });
+      const pool = this.pool;
+      for (let i = 0; i < tasks.length && !signal.aborted; i += THREADS) {
+        const batch = tasks.slice(i, i + THREADS);
+        const results = await Promise.all(batch.map((task) => pool.run(task, { signal }) as Promise<MonteCarloRun[]>));
+        for (const r of results) runs.push(...r);
+        if (signal.aborted) break;
+        await this.db.update(yieldJobs).set({ runsDone: runs.length }).where(and(eq(yieldJobs.id, jobId), eq(yieldJobs.status, 'running')));
+      }
+      if (!signal.aborted) {
+        await this.db.update(yieldJobs).set({ status: 'done', runsDone: runs.length, summary: summariseMonteCarlo(runs) }).where(and(eq(yieldJobs.id, jobId), eq(yieldJobs.status, 'running')));
+      }
+    } catch (error) {
+      if (!signal.aborted) {
+        const message = error instanceof Error ? error.message : String(error);
+        this.logger.warn(`yield job ${jobId} failed: ${message}`);
+        await this.db
+          .update(yieldJobs)
+          .set({ status: 'failed', error: message })
+          .where(and(eq(yieldJobs.id, jobId), eq(yieldJobs.status, 'running')))
+          .catch(() => undefined);
+      }
+    } finally {
+      this.running.delete(jobId);
+    }
+  }
+
+  private async rowOrFail(ref: VersionRef, jobId: string): Promise<YieldJobRow> {
+    const [row] = await this.db.select().from(yieldJobs).where(and(eq(yieldJobs.id, jobId), eq(yieldJobs.versionId, ref.version.id)));
+    if (!row) throw new NotFoundException(`Yield job "${jobId}" not found on version ${ref.version.number}`);
+    return row;
+  }
+
+  private async toJobs(rows: YieldJobRow[]): Promise<YieldJob[]> {
+    const logins = await loginMap(this.db, rows.map((r) => r.createdBy));
+    return rows.map((r) => ({
+      id: r.id,
+      versionId: r.versionId,
+      status: r.status,
+      runsDone: r.runsDone,
+      runsTotal: r.runsTotal,
+      summary: r.summary ?? null,
+      error: r.error,
+      createdBy: logins.get(r.createdBy) ?? '',
+      createdAt: r.createdAt.toISOString(),
+    }));
+  }
+}
+
