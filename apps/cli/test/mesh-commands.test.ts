@@ -11,14 +11,15 @@ const hexloom = (...args: string[]) => spawnSync('npx', ['--no-install', 'hexloo
 const dir = mkdtempSync(join(tmpdir(), 'hexloom-cli-mesh-'));
 
 describe('hexloom mesh, route and check', () => {
-  it('makes a radius-2 hexagon with an I/O site on each of its 12k + 6 boundary vertices', () => {
-    const r = hexloom('mesh', '--radius', '2', '--io', 'all', '--name', 'hex2', '-o', join(dir, 'hex2.json'));
+  it('makes a radius-2 hexagon with an I/O site on each of its 12k + 6 boundary vertices and two dead gates', () => {
+    const r = hexloom('mesh', '--radius', '2', '--io', 'all', '--name', 'hex2', '--dead', 'g(0,0)e,g(1,-1)nw', '-o', join(dir, 'hex2.json'));
     expect(r.status).toBe(0);
     const def = meshDefinitionSchema.parse(JSON.parse(readFileSync(join(dir, 'hex2.json'), 'utf8')));
     expect(def.shape).toEqual({ kind: 'hexagon', radius: 2 });
     // A radius-k block has 12k + 6 boundary vertices (from memory), each an I/O site with two ports.
     expect(def.ioSites).toHaveLength(30);
     expect(def.ports).toHaveLength(60);
+    expect(def.deadGates).toEqual(['g(0,0)e', 'g(1,-1)nw']);
   }, 60_000);
 
   it('routes a path, answers a taken port with exit code 2 and a JSON reason, and removes the circuit', () => {

@@ -102,7 +102,7 @@ export function registerMeshCommand(program: Command): void {
       if (!['fibre', 'modulator', 'detector', 'none'].includes(o.wiredTo)) throw new CliError(`--wired-to must be fibre, modulator, detector or none, got "${o.wiredTo}"`);
       const technology = o.technology ? readJsonFile(o.technology, technologyProfileSchema, 'technology profile') : PLACEHOLDER_TECHNOLOGY;
       const definition = meshErrors(() =>
-        makeMeshDefinition({ name: o.name, shape, technology, io: o.io as IoPreset, wiredTo: o.wiredTo as 'fibre', deadGates: o.dead ? o.dead.split(',').map((s) => s.trim()) : [] }),
+        makeMeshDefinition({ name: o.name, shape, technology, io: o.io as IoPreset, wiredTo: o.wiredTo as 'fibre', deadGates: o.dead ? o.dead.split(/,(?=\s*g\()/).map((s) => s.trim()) : [] }),
       );
       writeJson(parseJson(definition, meshDefinitionSchema, 'generated mesh definition'), o.out);
     });
