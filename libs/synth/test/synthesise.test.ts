@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkConfiguration } from '@hexloom/mesh';
+import { AXIAL_OFFSETS, checkConfiguration, parseGateId } from '@hexloom/mesh';
 import { unitDelayS } from '@hexloom/solver';
 import { synthesise, type SynthesisSuccess } from '../src/index.js';
 import { demoChip, DEMO_TECHNOLOGY } from './demo-chip.js';
@@ -33,6 +33,29 @@ describe('synthesise a ring notch on the demo chip', () => {
     v.response.powerDb.forEach((p, i) => { if (p < (v.response.powerDb[min] as number)) min = i; });
     // Resonances repeat every FSR = 1 / (6 T_u) (ring FSR, common practice); the grid step is FSR / 800.
     expect(Math.abs((v.response.frequencyHz[min] as number) - 3e9)).toBeLessThan(1 / (6 * T_U) / 400);
+  });
+
+  it('has the designed width and the resonant delay of the ring equations, negative when under-coupled', () => {
+    if (result.design.kind !== 'ring-notch') throw new Error('wrong kind');
+    const ring = result.design.ring;
+    const p = v.response.powerDb;
+    let min = 0;
+    p.forEach((x, i) => { if (x < (p[min] as number)) min = i; });
+    // Width at half depth in linear power (Rabus 2007, ch. 2), interpolated on the simulated curve.
+    const lin = p.map((x) => 10 ** (x / 10));
+    const half = (Math.max(...lin) + (lin[min] as number)) / 2;
+    let lo = min;
+    while (lo > 0 && (lin[lo] as number) < half) lo--;
+    let hi = min;
+    while (hi < lin.length - 1 && (lin[hi] as number) < half) hi++;
+    const width = (v.response.frequencyHz[hi] as number) - (v.response.frequencyHz[lo] as number);
+    expect(Math.abs(width - ring.fwhmHz) / ring.fwhmHz).toBeLessThan(0.1);
+    // Resonant delay a(1 - r^2) / ((a - r)(1 - ar)) round trips (from the phase of Yariv 2000's transmission),
+    // on top of the bus delay: bus path steps plus the coupler traversal, one unit each.
+    const busUnits = result.circuit.paths.filter((path) => path.role === 'bus').reduce((n, path) => n + path.steps.length, 0) + 1;
+    const ringDelayRoundTrips = ((v.response.groupDelayPs[min] as number) * 1e-12 - busUnits * T_U) / (6 * T_U);
+    expect(ringDelayRoundTrips).toBeLessThan(0);
+    expect(Math.abs(ringDelayRoundTrips - ring.delayAtResonanceRoundTrips) / Math.abs(ring.delayAtResonanceRoundTrips)).toBeLessThan(0.15);
   });
 
   it('reaches the designed notch depth within 2 dB on the whole-chip model', () => {
@@ -129,5 +152,27 @@ describe('impossible requests', () => {
     expect(second.ok).toBe(false);
     if (!second.ok) expect(second.reason).toBe('port-taken');
     void DEMO_TECHNOLOGY;
+  });
+});
+
+describe('placement inside a region', () => {
+  it('keeps every gate of the circuit on a cell of the region', () => {
+    const region = chip.mesh.cells.filter((c) => c.r <= 3).map((c) => c.id);
+    const inRegion = new Set(region);
+    const result = ok(
+      synthesise({
+        mesh: chip.mesh,
+        configuration: chip.configuration,
+        circuitId: 'notch',
+        spec: { schemaVersion: 1, name: 'notch', spec: { kind: 'ring-notch', from: west[2] as string, to: east[2] as string, centreOffsetHz: 0, target: { notchDepthDb: 15, regime: 'under' }, ring: { free: true }, region }, mask: { regions: [] } },
+      }),
+    );
+    const cellsOfGate = (id: string): string[] => {
+      const g = parseGateId(id);
+      const o = AXIAL_OFFSETS[g.direction] as { q: number; r: number };
+      return [`c(${g.cell.q},${g.cell.r})`, `c(${g.cell.q + o.q},${g.cell.r + o.r})`];
+    };
+    const gates = result.circuit.paths.flatMap((p) => p.steps.map((s) => s.gate)).concat(result.circuit.couplers.map((c) => c.gate));
+    for (const gate of gates) expect(cellsOfGate(gate).some((c) => inRegion.has(c)), gate).toBe(true);
   });
 });
