@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { buildPortGraph, chipNetlist, emptyConfiguration, gateThetaRad, placeCircuit, portGraphKey } from '../src/index.js';
+import { buildMesh, buildPortGraph, chipNetlist, emptyConfiguration, gateThetaRad, placeCircuit, portGraphKey } from '../src/index.js';
 import { demoMesh, sidePorts } from './fixtures.js';
 
 const mesh = demoMesh();
@@ -12,6 +12,19 @@ describe('port graph and chip netlist', () => {
     expect(sut.size).toBe(8 * mesh.gates.length + linked + 2 * mesh.ports.length);
     const arcs = sut.outEdges(portGraphKey(mesh, 'in', 0)).map((e) => sut.getEdgeAttributes(e).kind).sort();
     expect(arcs).toEqual(['bar', 'cross']);
+  });
+
+  it('finds by loss (Dijkstra on the graphology port graph) the same least length as by length when every gate loses the same', () => {
+    const uniform = buildMesh({ ...mesh.definition, technology: { ...mesh.definition.technology, bendLossDb: 0 } });
+    const { west, east } = sidePorts(uniform);
+    const cfg = emptyConfiguration(uniform.definition);
+    for (let k = 0; k < 12; k++) {
+      const from = west[(k * 5) % west.length]!;
+      const to = east[(k * 7 + 3) % east.length]!;
+      const byLength = placeCircuit(cfg, { kind: 'path', id: 'p', from, to }, uniform);
+      const byLoss = placeCircuit(cfg, { kind: 'path', id: 'p', from, to, metric: 'loss' }, uniform);
+      expect(byLoss.ok && byLoss.pathLengthsUnits[0], `${from} -> ${to}`).toBe(byLength.ok && byLength.pathLengthsUnits[0]);
+    }
   });
 
   it('gives the solver every segment, link and port, with the unit delay n_g L_u / c', () => {
