@@ -43,6 +43,8 @@ export type TechnologyProfile = {
   /** Extinction of a gate in bar or cross (power ratio of wanted to unwanted output). */
   readonly extinctionDb: number;
   readonly phaseShifter: PhaseShifterProfile;
+  /** Standard deviations of each coupler's splitting angle and of each phase, radians (tolerance studies). */
+  readonly tolerance?: { readonly couplerSigmaRad: number; readonly phaseSigmaRad: number } | undefined;
 };
 
 /** A complete mesh definition (the `mesh` file format, see docs/formats.md). */

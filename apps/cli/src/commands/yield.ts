@@ -11,7 +11,7 @@ import { CliError } from '../cli-error.js';
 import type { YieldChunkTask } from '../workers/yield-chunk.js';
 import { loadConfiguration, meshErrors, readJsonFile, writeJson } from './mesh.js';
 
-type YieldOptions = { spec: string; runs: string; seed: string; chunk: string; threads?: string; couplerSigma: string; phaseSigma: string; sensitivity?: boolean; out?: string; quiet?: boolean };
+type YieldOptions = { spec: string; runs: string; seed: string; chunk: string; threads?: string; couplerSigma?: string; phaseSigma?: string; sensitivity?: boolean; out?: string; quiet?: boolean };
 
 /** The input and the observed output of a specification (the filtered output for filters, the first branch for delay sets). */
 export function observedPorts(spec: FilterSpec): { from: string; to: string } {
@@ -25,6 +25,9 @@ export function observedPorts(spec: FilterSpec): { from: string; to: string } {
       return { from: s.from, to: s.to };
   }
 }
+
+/** Spreads used when neither the chip's technology profile nor the command line gives them (demo figures). */
+export const DEFAULT_TOLERANCE: ToleranceModel = { couplerSigmaRad: 0.01, phaseSigmaRad: 0.02 };
 
 const positiveInt = (value: string, name: string, max: number): number => {
   const n = Number(value);
@@ -47,8 +50,8 @@ export function registerYieldCommand(program: Command): void {
     .option('--seed <n>', 'seed of the random streams (same seed, same result)', '1')
     .option('--chunk <n>', 'runs per chunk of work (one chunk per worker task)', '25')
     .option('--threads <n>', 'worker threads (default: all cores)')
-    .option('--coupler-sigma <rad>', 'standard deviation of each 3 dB coupler splitting angle, rad', '0.01')
-    .option('--phase-sigma <rad>', 'standard deviation of each gate phase, rad', '0.02')
+    .option('--coupler-sigma <rad>', "standard deviation of each 3 dB coupler splitting angle, rad (default: the chip's technology tolerance, else 0.01)")
+    .option('--phase-sigma <rad>', "standard deviation of each gate phase, rad (default: the chip's technology tolerance, else 0.02)")
     .option('--sensitivity', 'also list the gates whose errors move the mask margin most')
     .option('-o, --out <file>', 'write the JSON summary to a file instead of stdout')
     .option('--quiet', 'no progress bar')
@@ -61,7 +64,11 @@ export function registerYieldCommand(program: Command): void {
       const seed = Number(o.seed);
       if (!Number.isInteger(seed)) throw new CliError(`--seed must be an integer, got "${o.seed}"`);
       const threads = o.threads === undefined ? availableParallelism() : positiveInt(o.threads, 'threads', 256);
-      const tolerance: ToleranceModel = { couplerSigmaRad: sigma(o.couplerSigma, 'coupler-sigma'), phaseSigmaRad: sigma(o.phaseSigma, 'phase-sigma') };
+      const fromChip = configuration.mesh.technology.tolerance;
+      const tolerance: ToleranceModel = {
+        couplerSigmaRad: o.couplerSigma === undefined ? (fromChip?.couplerSigmaRad ?? DEFAULT_TOLERANCE.couplerSigmaRad) : sigma(o.couplerSigma, 'coupler-sigma'),
+        phaseSigmaRad: o.phaseSigma === undefined ? (fromChip?.phaseSigmaRad ?? DEFAULT_TOLERANCE.phaseSigmaRad) : sigma(o.phaseSigma, 'phase-sigma'),
+      };
       const { from, to } = observedPorts(spec);
       const mask = spec.mask.regions as MaskRegion[];
       const { design, unitDelayS } = designCircuit(spec.spec, configuration.mesh.technology);

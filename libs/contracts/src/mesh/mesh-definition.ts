@@ -46,6 +46,8 @@ export const technologyProfileSchema = z.object({
   bendLossDb: z.number().min(0),
   extinctionDb: z.number().min(0),
   phaseShifter: phaseShifterProfileSchema,
+  /** Fabrication and drive spreads for tolerance studies (standard deviations, radians). */
+  tolerance: z.object({ couplerSigmaRad: z.number().min(0).max(1), phaseSigmaRad: z.number().min(0).max(1) }).optional(),
 });
 
 /** A mesh definition file (`"schemaVersion": 1`). */
