@@ -43,7 +43,7 @@ export class BenchExportController {
 
   @Get('touchstone')
   @ApiOperation({ summary: 'Touchstone (.sNp) of the simulated S-parameters between the given ports on a span of offsets (any member)' })
-  @ApiQuery({ name: 'ports', description: 'port ids or labels, comma-separated' })
+  @ApiQuery({ name: 'ports', description: 'port ids or labels; repeat the parameter or separate with ; (port ids hold commas)' })
   @ApiQuery({ name: 'startOffsetHz', schema: { type: 'number' } })
   @ApiQuery({ name: 'stopOffsetHz', schema: { type: 'number' } })
   @ApiQuery({ name: 'points', schema: { type: 'integer', minimum: 2, maximum: 20001 } })

@@ -62,9 +62,12 @@ export const driveLimitErrorSchema = z.object({
 /** GET .../bench-export query. */
 export const benchExportQuerySchema = z.object({ format: z.enum(['json', 'csv']).default('json') });
 
-/** GET .../touchstone query: ports (ids or labels, comma-separated) and the grid. */
+/** GET .../touchstone query: ports (ids or labels; repeat `ports`, or separate with `;` since port ids hold commas) and the grid. */
 export const touchstoneQuerySchema = z.object({
-  ports: z.string().min(1).transform((s) => s.split(',').map((p) => p.trim()).filter((p) => p.length > 0)),
+  ports: z
+    .union([z.string(), z.array(z.string())])
+    .transform((v) => (Array.isArray(v) ? v : [v]).flatMap((s) => s.split(';')).map((p) => p.trim()).filter((p) => p.length > 0))
+    .pipe(z.array(z.string()).min(1).max(16)),
   startOffsetHz: z.coerce.number().finite(),
   stopOffsetHz: z.coerce.number().finite(),
   points: z.coerce.number().int().min(2).max(20_001),
