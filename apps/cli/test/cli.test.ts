@@ -1,7 +1,10 @@
 import { execFileSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { HEXLOOM_VERSION } from '@hexloom/contracts';
+
+// Each call starts a fresh process that loads the TypeScript sources through tsx: seconds on a loaded machine.
+vi.setConfig({ testTimeout: 30_000 });
 
 const repoRoot = fileURLToPath(new URL('../../../', import.meta.url));
 const run = (...args: string[]): string =>

@@ -37,7 +37,7 @@ export type CouplerGate = {
   readonly phaseRad: number;
 };
 
-export type CircuitKind = 'path' | 'delay-line' | 'ring' | 'add-drop-ring' | 'coupled-rings' | 'mzi' | 'mzi-lattice' | 'splitter-tree';
+export type CircuitKind = 'path' | 'delay-line' | 'ring' | 'add-drop-ring' | 'coupled-rings' | 'mzi' | 'mzi-lattice' | 'splitter-tree' | 'rings-on-bus';
 
 /** A circuit placed on the chip. */
 export type Circuit = {

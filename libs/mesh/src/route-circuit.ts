@@ -12,6 +12,7 @@ import { checkPerimeter, ringPlacements } from './route-ring.js';
 import type { RouteRequest } from './route-request.js';
 import { RouteSpace } from './route-space.js';
 import { routeSplitterTree } from './route-splitter-tree.js';
+import { routeRingsOnBus } from './route-rings-on-bus.js';
 import { shortestByMetric } from './shortest-by-metric.js';
 import { walkOfLength } from './walks.js';
 
@@ -71,6 +72,8 @@ function route(mesh: Mesh, space: RouteSpace, r: RouteRequest, port: Map<string,
     }
     case 'splitter-tree':
       return routeSplitterTree(mesh, space, { from: p(r.from), outputs: r.outputs.map((o) => ({ port: p(o.port), delayUnits: o.delayUnits })), budget: r.budget });
+    case 'rings-on-bus':
+      return routeRingsOnBus(mesh, space, { from: p(r.from), to: p(r.to), rings: r.rings, budget: r.budget });
   }
 }
 

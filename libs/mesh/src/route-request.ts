@@ -61,4 +61,12 @@ export type SplitterTreeRequest = Common & {
   readonly outputs: readonly { readonly port: string; readonly delayUnits: number }[];
 };
 
-export type RouteRequest = PathRequest | DelayLineRequest | RingRequest | AddDropRingRequest | CoupledRingsRequest | MziRequest | MziLatticeRequest | SplitterTreeRequest;
+/** Several all-pass rings in series on one bus from `from` to `to` (each its own perimeter and bus coupling). */
+export type RingsOnBusRequest = Common & {
+  readonly kind: 'rings-on-bus';
+  readonly from: string;
+  readonly to: string;
+  readonly rings: readonly { readonly perimeterUnits: number; readonly kappa: number }[];
+};
+
+export type RouteRequest = PathRequest | DelayLineRequest | RingRequest | AddDropRingRequest | CoupledRingsRequest | MziRequest | MziLatticeRequest | SplitterTreeRequest | RingsOnBusRequest;

@@ -146,11 +146,9 @@ export function synthesise({ spec, mesh, configuration, circuitId, impulse }: Sy
     case 'allpass-equaliser': {
       if (body.kind !== 'allpass-equaliser') throw new Error('unreachable');
       const stages = design.equaliser.stages;
-      if (stages.length !== 1) return failure('not-enough-free-area', `synth: the router places one all-pass ring per bus; an equaliser of ${stages.length} stages needs rings in series on one bus, which the router does not place yet`, notes);
-      const stage = stages[0]!;
-      couplerKappas = [stage.powerCoupling];
-      centres = [stage.resonanceOffsetHz];
-      const r = place({ kind: 'ring', id: circuitId, from: body.from, to: body.to, perimeterUnits: 6, kappa: stage.powerCoupling, ...region });
+      couplerKappas = stages.map((st) => st.powerCoupling);
+      centres = stages.map((st) => st.resonanceOffsetHz);
+      const r = place({ kind: 'rings-on-bus', id: circuitId, from: body.from, to: body.to, rings: stages.map((st) => ({ perimeterUnits: design.perimeterUnits, kappa: st.powerCoupling })), ...region });
       placed = r.ok ? r : failure(r.reason, r.message, notes);
       outputs = [{ from: body.from, to: body.to }];
       break;

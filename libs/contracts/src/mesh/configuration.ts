@@ -35,7 +35,7 @@ export const couplerGateSchema = z.object({
   phaseRad: z.number(),
 });
 
-export const circuitKindSchema = z.enum(['path', 'delay-line', 'ring', 'add-drop-ring', 'coupled-rings', 'mzi', 'mzi-lattice', 'splitter-tree']);
+export const circuitKindSchema = z.enum(['path', 'delay-line', 'ring', 'add-drop-ring', 'coupled-rings', 'mzi', 'mzi-lattice', 'splitter-tree', 'rings-on-bus']);
 
 export const circuitSchema = z.object({
   id: z.string().regex(/^[A-Za-z][A-Za-z0-9_-]{0,63}$/, 'a circuit id: a letter, then letters, digits, _ or -'),

@@ -17,6 +17,7 @@ export const routeRequestSchema = z.discriminatedUnion('kind', [
   z.object({ ...common, kind: z.literal('delay-line'), from: port, to: port, lengthUnits: units.min(1) }),
   z.object({ ...common, kind: z.literal('ring'), from: port, to: port, perimeterUnits: units, kappa, phaseRad: z.number().optional() }),
   z.object({ ...common, kind: z.literal('add-drop-ring'), from: port, to: port, add: port.optional(), drop: port, perimeterUnits: units, kappa, dropKappa: kappa.optional() }),
+  z.object({ ...common, kind: z.literal('rings-on-bus'), from: port, to: port, rings: z.array(z.object({ perimeterUnits: units, kappa })).min(1).max(12) }),
   z.object({ ...common, kind: z.literal('coupled-rings'), from: port, to: port, drop: port, add: port.optional(), rings: units.min(1).max(50), kappas: z.array(kappa) }),
   z.object({ ...common, kind: z.literal('mzi'), from: port, to: port, lengthDifferenceUnits: units.min(0), kappas: z.array(kappa).optional() }),
   z.object({ ...common, kind: z.literal('mzi-lattice'), from: port, to: port, lengthDifferencesUnits: z.array(units.min(0)).min(1), kappas: z.array(kappa).optional() }),
