@@ -19,6 +19,8 @@ export type Verification = { from: string; to: string; response: Transmission; m
 
 export type SynthesisSuccess = {
   ok: true;
+  /** FSR of the realised circuit, Hz: of its rings, of its lattice stage, or the unit FSR for paths and trees. */
+  fsrHz: number;
   configuration: Configuration;
   circuit: Circuit;
   design: CircuitDesign;
@@ -168,5 +170,20 @@ export function synthesise({ spec, mesh, configuration, circuitId, impulse }: Sy
     const response = simulateTransmission({ mesh, configuration: result, from, to, offsetsHz, ...(impulse ? { impulse } : {}) });
     return { from, to, response, mask: k === 0 ? checkMask(response, spec.mask.regions as MaskRegion[]) : checkMask(response, []), figures: responseFigures(response) };
   });
-  return { ok: true, configuration: result, circuit, design, notes, tunings, verification };
+  return { ok: true, fsrHz: realisedFsrHz(design, unitDelayS), configuration: result, circuit, design, notes, tunings, verification };
+}
+
+/** The period of the response in frequency: 1 / (L T_u) for rings of L units, the lattice FSR, else the unit FSR. */
+function realisedFsrHz(design: CircuitDesign, unitDelayS: number): number {
+  switch (design.kind) {
+    case 'ring-notch':
+    case 'add-drop':
+    case 'coupled-ring-bandpass':
+    case 'allpass-equaliser':
+      return 1 / (design.perimeterUnits * unitDelayS);
+    case 'mzi-lattice':
+      return design.latticeFsrHz;
+    default:
+      return 1 / unitDelayS;
+  }
 }

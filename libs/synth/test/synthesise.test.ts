@@ -24,8 +24,10 @@ describe('synthesise a ring notch on the demo chip', () => {
   );
   const v = result.verification[0]!;
 
-  it('places a valid circuit', () => {
+  it('places a valid circuit with the FSR of a six-unit ring', () => {
     expect(checkConfiguration(chip.mesh, result.configuration)).toEqual({ ok: true, violations: [] });
+    // FSR = 1 / (6 T_u) for a single-cell ring (ring FSR, common practice).
+    expect(result.fsrHz).toBeCloseTo(1 / (6 * T_U), -3);
   });
 
   it('puts the notch at the requested centre (phase tuning)', () => {

@@ -15,7 +15,7 @@ type SynthOptions = { chip: string; into?: string; id?: string; out?: string; re
 
 /** A one-screen summary of what was designed, changed, and how the mask went. */
 export function synthSummary(result: SynthesisSuccess): string {
-  const lines = [`placed ${result.design.kind} ${result.circuit.id}: ${result.circuit.paths.length} paths, ${result.circuit.couplers.length} couplers`];
+  const lines = [`placed ${result.design.kind} ${result.circuit.id}: ${result.circuit.paths.length} paths, ${result.circuit.couplers.length} couplers, FSR ${(result.fsrHz / 1e9).toFixed(3)} GHz`];
   if (result.circuit.couplers.length > 0) lines.push(`  couplers (kappa): ${result.circuit.couplers.map((c) => `${c.gate}=${c.kappa.toFixed(4)}`).join(', ')}`);
   for (const t of result.tunings) lines.push(`  loop of ${t.lengthUnits} units tuned by ${t.gate}: phase ${t.phaseRad.toFixed(4)} rad`);
   for (const n of result.notes) lines.push(`  note: ${n.quantity} ${n.requested === null ? '' : `asked ${n.requested.toPrecision(6)} `}got ${n.achieved.toPrecision(6)} ${n.unit} (${n.note})`);
@@ -31,6 +31,7 @@ export function synthSummary(result: SynthesisSuccess): string {
 export function synthReport(result: SynthesisSuccess): unknown {
   return {
     circuit: result.circuit.id,
+    fsrHz: result.fsrHz,
     design: result.design,
     notes: result.notes,
     tunings: result.tunings,
