@@ -23,7 +23,10 @@ describe('a fresh in-memory database', () => {
     const rows = await sut.db.execute<{ table_name: string }>(
       sql`select table_name from information_schema.tables where table_schema = 'public' order by table_name`,
     );
-    expect(rows.rows.map((r) => r.table_name)).toEqual(['audit_events', 'invitations', 'memberships', 'sessions', 'teams', 'users']);
+    expect(rows.rows.map((r) => r.table_name)).toEqual([
+      'audit_events', 'calibrations', 'chips', 'comments', 'configuration_versions', 'configurations', 'invitations', 'measurements',
+      'memberships', 'outbox_messages', 'reviews', 'sessions', 'simulation_cache', 'teams', 'users', 'yield_jobs',
+    ]);
   });
 
   it('rejects a membership role outside the four roles (check constraint)', async () => {
