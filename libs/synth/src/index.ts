@@ -55,3 +55,5 @@ export type { SynthesiseInput, SynthesisFailure, SynthesisSuccess, Verification 
 export { canonicalLattice, tuneLattice } from './tune-lattice.js';
 export { drawPerturbations, gateSensitivities, MONTE_CARLO_IMPULSE, yieldTrial } from './yield-trial.js';
 export type { GateSensitivity, ToleranceModel, YieldStudy } from './yield-trial.js';
+export { runYieldChunk } from './yield-chunk.js';
+export type { YieldChunkTask } from './yield-chunk.js';

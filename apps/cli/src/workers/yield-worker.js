@@ -1,7 +1,7 @@
-// Worker-thread entry of `hexloom yield`: loads the TypeScript chunk runner through tsx (each thread registers it).
+// Worker-thread entry of `hexloom yield`: loads the TypeScript sources through tsx (each thread registers it).
 import { register } from 'tsx/esm/api';
 
 register();
-const { runYieldChunk } = await import('./yield-chunk.ts');
+const { runYieldChunk } = await import('@hexloom/synth');
 
 export default runYieldChunk;

@@ -1,7 +1,10 @@
-/** One Monte Carlo chunk of a yield study, run inside a worker thread (plain data in, plain data out). */
+/** One Monte Carlo chunk of a yield study as plain data in and out, for worker threads (CLI and server). */
 import { buildMesh, type Configuration } from '@hexloom/mesh';
-import { runMonteCarloChunk, yieldTrial, type MaskRegion, type MonteCarloChunk, type MonteCarloRun, type ToleranceModel } from '@hexloom/synth';
+import type { MaskRegion } from './mask-types.js';
+import { runMonteCarloChunk, type MonteCarloChunk, type MonteCarloRun } from './monte-carlo.js';
+import { yieldTrial, type ToleranceModel } from './yield-trial.js';
 
+/** Everything a worker needs, structured-cloneable. */
 export type YieldChunkTask = {
   configuration: Configuration;
   from: string;
