@@ -8,7 +8,6 @@ import { filterSpecSchema, type FilterSpec } from '@hexloom/contracts';
 import { buildMesh } from '@hexloom/mesh';
 import { designCircuit, gateSensitivities, MONTE_CARLO_DENSITY, type YieldChunkTask, planMonteCarlo, summariseMonteCarlo, verificationOffsets, type MaskRegion, type MonteCarloRun, type ToleranceModel } from '@hexloom/synth';
 import { CliError } from '../cli-error.js';
-
 import { loadConfiguration, meshErrors, readJsonFile, writeJson } from './mesh.js';
 
 type YieldOptions = { spec: string; runs: string; seed: string; chunk: string; threads?: string; couplerSigma?: string; phaseSigma?: string; sensitivity?: boolean; out?: string; quiet?: boolean };
