@@ -11,6 +11,7 @@ import { resolveOptions } from './common/resolve-options.js';
 import { setupOpenApi } from './common/setup-open-api.js';
 import { openDatabase } from './db/migrate.js';
 import { seedDemo } from './db/seed.js';
+import { seedDemoDesigns } from './db/seed-demo-designs.js';
 import { serveWebApp } from './web/serve-web-app.js';
 
 /** Options of createHexloomApp; `logLevels` defaults to errors and warnings only. */
@@ -25,6 +26,7 @@ export async function createHexloomApp(options: CreateHexloomAppOptions): Promis
   const database = await openDatabase(resolved.dataDir);
   try {
     if (resolved.seedDemo) await seedDemo(database.db);
+    if (resolved.seedDemoDesigns) await seedDemoDesigns(database.db);
     const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(resolved, database), {
       logger: options.logLevels ?? ['error', 'warn'],
       abortOnError: false,

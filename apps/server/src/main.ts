@@ -33,6 +33,7 @@ async function main(): Promise<void> {
   const app = await createHexloomApp({
     dataDir,
     seedDemo: (process.env['HEXLOOM_SEED_DEMO'] ?? 'true') !== 'false',
+    seedDemoDesigns: (process.env['HEXLOOM_SEED_DEMO_DESIGNS'] ?? 'true') !== 'false',
     webDistDir: join(root, 'apps', 'web', 'dist'),
     publicUrl,
     sessionSecret: sessionSecret(dataDir),

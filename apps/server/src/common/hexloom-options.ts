@@ -9,6 +9,8 @@ export type HexloomOptions = {
   dataDir: string | 'memory';
   /** Insert the invented demo team and accounts (idempotent). */
   seedDemo: boolean;
+  /** With seedDemo: also the demo chip, calibration, configurations, reviews and a synthetic measurement (default true). */
+  seedDemoDesigns?: boolean;
   /** Built web app to serve with SPA fallback; skipped when absent or missing on disk. */
   webDistDir?: string;
   /** Public origin used in OAuth redirects, e.g. `http://localhost:3000`. */
@@ -28,6 +30,7 @@ export type HexloomOptions = {
 export type ResolvedOptions = {
   dataDir: string;
   seedDemo: boolean;
+  seedDemoDesigns: boolean;
   webDistDir: string | null;
   publicUrl: string;
   sessionSecret: string;

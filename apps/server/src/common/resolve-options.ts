@@ -17,6 +17,7 @@ export function resolveOptions(options: HexloomOptions): ResolvedOptions {
   return {
     dataDir: options.dataDir,
     seedDemo: options.seedDemo,
+    seedDemoDesigns: options.seedDemo && (options.seedDemoDesigns ?? true),
     webDistDir: options.webDistDir ?? null,
     publicUrl,
     sessionSecret: options.sessionSecret || randomBytes(32).toString('hex'),

@@ -5,9 +5,9 @@ import { createHexloomApp, type CreateHexloomAppOptions } from '../../src/app.fa
 import { DATABASE, type Database } from '../../src/db/database.js';
 import { auditEvents, teams, users } from '../../src/db/schema/index.js';
 
-/** Starts an in-memory, seeded app (options override the defaults). */
+/** Starts an in-memory app with the demo team and accounts (not the demo designs unless asked); options override. */
 export async function startTestApp(options: Partial<CreateHexloomAppOptions> = {}): Promise<INestApplication> {
-  return createHexloomApp({ dataDir: 'memory', seedDemo: true, sessionSecret: 'test-secret', ...options });
+  return createHexloomApp({ dataDir: 'memory', seedDemo: true, seedDemoDesigns: false, sessionSecret: 'test-secret', ...options });
 }
 
 /** The Drizzle handle of a running app. */
