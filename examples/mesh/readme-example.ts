@@ -1,5 +1,5 @@
 // The libs/mesh README example: make a mesh, place a notch ring and a delay line, check the result.
-import { buildMesh, checkConfiguration, emptyConfiguration, makeMeshDefinition, placeCircuit, type Configuration } from '@hexloom/mesh';
+import { buildMesh, checkConfiguration, DEMO_TECHNOLOGY, emptyConfiguration, makeMeshDefinition, placeCircuit, type Configuration } from '@hexloom/mesh';
 
 /** Runs the example; returns the configuration, the checker's answer and the ring's perimeter. */
 export function readmeExample(): { configuration: Configuration; violations: number; ringUnits: number; delayUnits: number } {
@@ -7,15 +7,7 @@ export function readmeExample(): { configuration: Configuration; violations: num
     name: 'demo',
     shape: { kind: 'rectangle', rows: 8, columns: 12 },
     io: 'left-right',
-    technology: {
-      unitLengthUm: 650,
-      groupIndex: 4.2,
-      referenceFrequencyHz: 193.4e12,
-      lossPerGateDb: 0.25,
-      bendLossDb: 0.05,
-      extinctionDb: 25,
-      phaseShifter: { piPowerW: 0.022, resistanceOhm: 1200, maxPowerW: 0.06, maxVoltageV: 9 },
-    },
+    technology: DEMO_TECHNOLOGY,
   });
   const mesh = buildMesh(definition);
   let configuration = emptyConfiguration(definition, 'bar');

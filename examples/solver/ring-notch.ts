@@ -1,5 +1,5 @@
 // Example: place a single-cell ring notch on an invented demo chip and read its response with @hexloom/solver.
-import { buildMesh, emptyConfiguration, MESH_SCHEMA_VERSION, placeCircuit, type Configuration, type MeshDefinition } from '@hexloom/mesh';
+import { buildMesh, DEMO_TECHNOLOGY, emptyConfiguration, MESH_SCHEMA_VERSION, placeCircuit, type Configuration, type MeshDefinition } from '@hexloom/mesh';
 import { amplitudeDb, netlistFromMesh, simulateConnection } from '@hexloom/solver';
 
 /** The demo chip (invented figures): a radius-2 block, 650 um units, n_g 4.2, 0.25 dB per gate, 25 dB extinction. */
@@ -8,15 +8,7 @@ export function demoRingConfiguration(): Configuration {
     schemaVersion: MESH_SCHEMA_VERSION,
     name: 'demo ring notch',
     shape: { kind: 'hexagon', radius: 2 },
-    technology: {
-      unitLengthUm: 650,
-      groupIndex: 4.2,
-      referenceFrequencyHz: 193.4e12,
-      lossPerGateDb: 0.25,
-      bendLossDb: 0,
-      extinctionDb: 25,
-      phaseShifter: { piPowerW: 0.022, resistanceOhm: 1200, maxPowerW: 0.08, maxVoltageV: 12 },
-    },
+    technology: { ...DEMO_TECHNOLOGY, bendLossDb: 0, phaseShifter: { ...DEMO_TECHNOLOGY.phaseShifter, maxPowerW: 0.08, maxVoltageV: 12 } },
     ioSites: [],
     ports: [],
     deadGates: [],

@@ -1,16 +1,8 @@
 // Mesh engine benchmark: graph build, shortest paths, exact-length routes and ring placements on
 // 12x8, 30x30 and 60x60 meshes. Run: npx tsx libs/mesh/bench/mesh.bench.ts (prints a Markdown table).
-import { buildMesh, buildPortGraph, emptyConfiguration, makeMeshDefinition, routeCircuit, type Mesh, type TechnologyProfile } from '../src/index.js';
+import { buildMesh, buildPortGraph, DEMO_TECHNOLOGY, emptyConfiguration, makeMeshDefinition, routeCircuit, type Mesh } from '../src/index.js';
 
-const TECH: TechnologyProfile = {
-  unitLengthUm: 650,
-  groupIndex: 4.2,
-  referenceFrequencyHz: 193.4e12,
-  lossPerGateDb: 0.25,
-  bendLossDb: 0.05,
-  extinctionDb: 25,
-  phaseShifter: { piPowerW: 0.022, resistanceOhm: 1200, maxPowerW: 0.06, maxVoltageV: 9 },
-};
+const TECH = DEMO_TECHNOLOGY;
 
 /** Seeded linear congruential generator (Numerical Recipes constants) so runs are repeatable. */
 function lcg(seed: number): () => number {

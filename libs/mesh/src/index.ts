@@ -23,3 +23,4 @@ export { MZI_ARM_ATTEMPTS } from './route-mzi-lattice.js';
 export { TREE_BRANCH_ATTEMPTS } from './route-splitter-tree.js';
 export { CHAIN_ATTEMPTS } from './route-coupled-rings.js';
 export * from './make-mesh-definition.js';
+export * from './demo-technology.js';

@@ -1,16 +1,8 @@
 // Mesh chips for the adapter tests and the benchmark, built through libs/mesh's public API.
-import { buildMesh, CONFIGURATION_SCHEMA_VERSION, MESH_SCHEMA_VERSION, type Configuration, type GateSetting, type Mesh, type MeshDefinition, type MeshShape, type TechnologyProfile } from '@hexloom/mesh';
+import { buildMesh, CONFIGURATION_SCHEMA_VERSION, DEMO_TECHNOLOGY, MESH_SCHEMA_VERSION, type Configuration, type GateSetting, type Mesh, type MeshDefinition, type MeshShape, type TechnologyProfile } from '@hexloom/mesh';
 
 /** Demo technology (invented): 650 um unit, n_g 4.2, 0.25 dB per gate, 25 dB extinction. */
-export const DEMO_TECH: TechnologyProfile = {
-  unitLengthUm: 650,
-  groupIndex: 4.2,
-  referenceFrequencyHz: 193.4e12,
-  lossPerGateDb: 0.25,
-  bendLossDb: 0,
-  extinctionDb: 25,
-  phaseShifter: { piPowerW: 0.022, resistanceOhm: 1200, maxPowerW: 0.08, maxVoltageV: 12 },
-};
+export const DEMO_TECH: TechnologyProfile = { ...DEMO_TECHNOLOGY, bendLossDb: 0, phaseShifter: { ...DEMO_TECHNOLOGY.phaseShifter, maxPowerW: 0.08, maxVoltageV: 12 } };
 
 /** A mesh whose I/O sites are every `everyNth` boundary vertex (in the mesh's own site order). */
 export function meshWithIo(shape: MeshShape, technology: TechnologyProfile = DEMO_TECH, everyNth = 1): Mesh {

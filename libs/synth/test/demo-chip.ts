@@ -1,16 +1,7 @@
 // Test fixture: the invented demo chip (12 x 8 cells, I/O on the west and east sides) and its side ports.
-import { buildMesh, emptyConfiguration, makeMeshDefinition, vertexPosition, type Configuration, type Mesh, type TechnologyProfile } from '@hexloom/mesh';
+import { buildMesh, DEMO_TECHNOLOGY, emptyConfiguration, makeMeshDefinition, vertexPosition, type Configuration, type Mesh, type TechnologyProfile } from '@hexloom/mesh';
 
-/** Demo figures (invented, from the demo scenario). */
-export const DEMO_TECHNOLOGY: TechnologyProfile = {
-  unitLengthUm: 650,
-  groupIndex: 4.2,
-  referenceFrequencyHz: 193.4e12,
-  lossPerGateDb: 0.25,
-  bendLossDb: 0.05,
-  extinctionDb: 25,
-  phaseShifter: { piPowerW: 0.022, resistanceOhm: 1200, maxPowerW: 0.06, maxVoltageV: 9 },
-};
+export { DEMO_TECHNOLOGY };
 
 export function demoChip(technology: TechnologyProfile = DEMO_TECHNOLOGY): { mesh: Mesh; configuration: Configuration; west: string[]; east: string[] } {
   const definition = makeMeshDefinition({ name: 'demo', shape: { kind: 'rectangle', rows: 8, columns: 12 }, technology });

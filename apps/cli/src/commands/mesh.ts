@@ -3,19 +3,9 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import type { Command } from 'commander';
 import type { z } from 'zod';
 import { configurationSchema, meshDefinitionSchema, meshShapeSchema, technologyProfileSchema } from '@hexloom/contracts';
-import type { Configuration, IoPreset, MeshShape, TechnologyProfile } from '@hexloom/mesh';
+import { DEMO_TECHNOLOGY, type Configuration, type IoPreset, type MeshShape } from '@hexloom/mesh';
 import { CliError } from '../cli-error.js';
 
-/** Placeholder technology used when no --technology file is given (invented demo figures, not a real process). */
-export const PLACEHOLDER_TECHNOLOGY: TechnologyProfile = {
-  unitLengthUm: 650,
-  groupIndex: 4.2,
-  referenceFrequencyHz: 193.4e12,
-  lossPerGateDb: 0.25,
-  bendLossDb: 0.05,
-  extinctionDb: 25,
-  phaseShifter: { piPowerW: 0.022, resistanceOhm: 1200, maxPowerW: 0.06, maxVoltageV: 9 },
-};
 
 /** Reads a JSON file and checks it with a schema; a CliError names the file and the first bad field. */
 export function readJsonFile<T extends z.ZodType>(path: string, schema: T, what: string): z.infer<T> {
@@ -100,7 +90,7 @@ export function registerMeshCommand(program: Command): void {
       else throw new CliError('give --rows and --columns, or --radius, or --cells');
       if (!['all', 'left-right', 'none'].includes(o.io)) throw new CliError(`--io must be all, left-right or none, got "${o.io}"`);
       if (!['fibre', 'modulator', 'detector', 'none'].includes(o.wiredTo)) throw new CliError(`--wired-to must be fibre, modulator, detector or none, got "${o.wiredTo}"`);
-      const technology = o.technology ? readJsonFile(o.technology, technologyProfileSchema, 'technology profile') : PLACEHOLDER_TECHNOLOGY;
+      const technology = o.technology ? readJsonFile(o.technology, technologyProfileSchema, 'technology profile') : DEMO_TECHNOLOGY;
       const definition = meshErrors(() =>
         makeMeshDefinition({ name: o.name, shape, technology, io: o.io as IoPreset, wiredTo: o.wiredTo as 'fibre', deadGates: o.dead ? o.dead.split(/,(?=\s*g\()/).map((s) => s.trim()) : [] }),
       );
