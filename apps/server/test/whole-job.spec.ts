@@ -124,6 +124,11 @@ describe('the whole job, from a new chip to a measured comparison', () => {
     expect(file.portCount).toBe(2);
     expect(file.frequenciesHz).toHaveLength(11);
     expect(res.text).toContain('! caution: Drive values can destroy a chip');
+    // The exported simulation, uploaded back as a measurement, compares with the simulation to within print precision.
+    const uploaded = await noor.post(`${base}/versions/2/measurements`).field('from', ports.west[1] ?? '').field('to', ports.east[1] ?? '').attach('file', Buffer.from(res.text), 'sim.s2p').expect(201);
+    expect(uploaded.body).toMatchObject({ format: 'touchstone', points: 11 });
+    const cmp = comparisonSchema.parse((await noor.get(`${base}/versions/2/measurements/${uploaded.body.id}/comparison`).expect(200)).body);
+    expect(cmp.figures.maxAbsResidualDb).toBeLessThan(1e-6);
   });
 
   it('uploads a measured spectrum and compares it with the simulation on the measured grid', async () => {
