@@ -49,6 +49,18 @@ describe('chips, calibration and configuration versions', () => {
     expect(bad.body.message).toMatch(/cannot be built/);
   });
 
+  it('imports an uploaded chip JSON file, and refuses a file that is not JSON or not a chip (422)', async () => {
+    const exported = (await designer.get(`/api/teams/${teamId}/chips/${chip.id}/export`).expect(200)).text;
+    const imported = await designer.post(`/api/teams/${teamId}/chips/import`).attach('file', Buffer.from(exported), 'chip.json').expect(201);
+    expect(imported.body.definition).toEqual(chip.definition);
+    const notJson = await designer.post(`/api/teams/${teamId}/chips/import`).attach('file', Buffer.from('{ nope'), 'chip.json');
+    expect(notJson.status).toBe(422);
+    expect(notJson.body.message).toMatch(/"chip.json" is not JSON/);
+    const notChip = await designer.post(`/api/teams/${teamId}/chips/import`).attach('file', Buffer.from('{"schemaVersion": 1}'), 'chip.json');
+    expect(notChip.status).toBe(422);
+    expect(notChip.body.message).toMatch(/is not a chip definition: name:/);
+  });
+
   it('edits the technology profile and dead gates, counting revisions', async () => {
     const gate = buildMesh(chip.definition).gates[5]?.id ?? '';
     const res = await designer

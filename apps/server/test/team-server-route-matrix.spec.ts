@@ -106,6 +106,12 @@ describe('team-server route x role matrix', () => {
       expected: only(['designer', 'owner'], 201),
       table: chips,
     },
+    {
+      route: 'POST /chips/import',
+      call: async (a, c) => a.post(`/api/teams/${c.teamId}/chips/import`).attach('file', Buffer.from((await agents.owner.get(`/api/teams/${c.teamId}/chips/${c.chipId}/export`)).text), 'chip.json'),
+      expected: only(['designer', 'owner'], 201),
+      table: chips,
+    },
     { route: 'GET /chips/:chipId', call: (a, c) => a.get(`/api/teams/${c.teamId}/chips/${c.chipId}`), expected: members(200) },
     {
       route: 'PATCH /chips/:chipId',

@@ -31,6 +31,7 @@ const ROUTES = [
   'get /api/teams/{teamId}/outbox',
   'get /api/teams/{teamId}/chips',
   'post /api/teams/{teamId}/chips',
+  'post /api/teams/{teamId}/chips/import',
   'get /api/teams/{teamId}/chips/{chipId}',
   'patch /api/teams/{teamId}/chips/{chipId}',
   'get /api/teams/{teamId}/chips/{chipId}/export',

@@ -17,6 +17,7 @@ import { MAX_UPLOAD_BYTES, type UploadedFileLike, uploadedText } from '../common
 import { ZodValidationPipe } from '../common/zod-validation.pipe.js';
 import { CalibrationService } from './calibration.service.js';
 import { ChipsService } from './chips.service.js';
+import { parseChipJson } from './parse-chip-json.js';
 
 const teamParams = z.object({ teamId: z.uuid() });
 const chipParams = z.object({ teamId: z.uuid(), chipId: z.uuid() });
@@ -53,6 +54,25 @@ export class ChipsController {
     @Body(new ZodValidationPipe(createChipSchema)) body: CreateChip,
   ): Promise<Chip> {
     return this.chips.create(user, params.teamId, body);
+  }
+
+  @Post('import')
+  @HttpCode(201)
+  @TeamRoles('owner', 'designer')
+  @UseInterceptors(FileInterceptor('file', { limits: { fileSize: MAX_UPLOAD_BYTES, files: 1 } }))
+  @ApiOperation({ summary: 'Create a chip from an uploaded chip JSON file (mesh definition, schema version 1) (designers, owners)' })
+  @ApiConsumes('multipart/form-data')
+  @ApiBody({ schema: { type: 'object', required: ['file'], properties: { file: { type: 'string', format: 'binary', description: 'chip .json' } } } })
+  @ApiCreatedResponse({ schema: openApiSchema(chipSchema) })
+  @ApiPayloadTooLargeResponse({ description: `File above ${MAX_UPLOAD_BYTES} bytes` })
+  @ApiUnsupportedMediaTypeResponse({ description: 'Not a .json name, or not UTF-8 text' })
+  @ApiUnprocessableEntityResponse({ description: 'Not JSON, not a chip definition, or a definition that cannot be built' })
+  importJson(
+    @CurrentUser() user: User,
+    @Param(new ZodValidationPipe(teamParams)) params: z.output<typeof teamParams>,
+    @UploadedFile() file: UploadedFileLike | undefined,
+  ): Promise<Chip> {
+    return this.chips.create(user, params.teamId, { definition: parseChipJson(uploadedText(file, [/\.json$/i])) });
   }
 
   @Get(':chipId')
