@@ -2,10 +2,25 @@
 import { Injectable } from '@nestjs/common';
 import type { CircuitFigures, CircuitSpec, ConfigurationFile, Proposal, RouteRequestFile, SynthesiseBody } from '@hexloom/contracts';
 import { placeCircuit, removeCircuit, type RouteRequest } from '@hexloom/mesh';
-import { synthesise } from '@hexloom/synth';
+import { type ResponseFigures, synthesise } from '@hexloom/synth';
 import { buildChipMesh } from '../chips/chips.service.js';
 import type { ConfigurationVersionRow } from '../db/schema/index.js';
 import { NothingToRerouteError } from './compute-errors.js';
+
+/** The figures saved with a version: the quoted response figures and the worst mask margin, finite values only. */
+function quotedFigures(f: ResponseFigures, worstMarginDb: number | null): Record<string, number> {
+  const all: Record<string, number | null> = {
+    insertionLossDb: f.insertionLossDb,
+    peakFrequencyHz: f.peakFrequencyHz,
+    bandwidth3dBHz: f.bandwidth3dBHz,
+    band3dBLowHz: f.band3dBHz[0],
+    band3dBHighHz: f.band3dBHz[1],
+    rejectionDb: f.rejectionDb,
+    delayRippleIn3dBBandPs: f.delayRippleIn3dBBandPs,
+    worstMarginDb,
+  };
+  return Object.fromEntries(Object.entries(all).filter((e): e is [string, number] => typeof e[1] === 'number' && Number.isFinite(e[1])));
+}
 
 const withoutCircuit = <T>(record: Record<string, T>, id: string): Record<string, T> => Object.fromEntries(Object.entries(record).filter(([k]) => k !== id));
 
@@ -49,22 +64,17 @@ export class EditService {
   private synthesiseOn(version: ConfigurationVersionRow, content: ConfigurationFile, body: SynthesiseBody, specs: CircuitSpec[], figures: CircuitFigures): Proposal {
     const result = synthesise({ spec: body.spec, mesh: buildChipMesh(content.mesh), configuration: content, circuitId: body.circuitId });
     if (!result.ok) return { ok: false, reason: result.reason, message: result.message, notes: result.notes };
-    const verification = result.verification.map((v) => ({
-      from: v.from,
-      to: v.to,
-      pass: v.mask.pass,
-      figures: { ...v.figures, band3dBLowHz: v.figures.band3dBHz[0], band3dBHighHz: v.figures.band3dBHz[1], worstMarginDb: v.mask.worst?.margin ?? 0 } as unknown as Record<string, number>,
-    }));
+    const verification = result.verification.map((v) => ({ from: v.from, to: v.to, pass: v.mask.pass, figures: quotedFigures(v.figures, v.mask.worst?.margin ?? null) }));
     const first = verification[0];
-    const newFigures = first ? { ...figures, [body.circuitId]: Object.fromEntries(Object.entries(first.figures).filter(([, v]) => typeof v === 'number' && Number.isFinite(v))) } : figures;
+    const newFigures = first ? { ...figures, [body.circuitId]: first.figures } : figures;
     return {
       ok: true,
       basedOnVersion: version.number,
       content: result.configuration as ConfigurationFile,
       circuit: result.circuit as ConfigurationFile['circuits'][number],
       notes: result.notes,
-      design: result.design as unknown as Record<string, unknown>,
-      verification: verification.map((v) => ({ ...v, figures: Object.fromEntries(Object.entries(v.figures).filter(([, x]) => typeof x === 'number' && Number.isFinite(x))) })),
+      design: result.design,
+      verification,
       figures: newFigures,
       specs: [...specs.filter((s) => s.circuitId !== body.circuitId), { circuitId: body.circuitId, spec: body.spec }],
     };
