@@ -229,6 +229,17 @@ describe('team-server route x role matrix', () => {
     }, 60_000);
   }
 
+  it('records every kind of team-server change in the audit log', async () => {
+    const events = (await agents.owner.get(`/api/teams/${ctx.teamId}/audit?limit=500`).expect(200)).body as { action: string }[];
+    const actions = new Set(events.map((e) => e.action));
+    for (const action of [
+      'chip.created', 'chip.updated', 'calibration.uploaded', 'configuration.created', 'configuration.duplicated', 'version.saved',
+      'review.requested', 'review.decided', 'comment.created', 'measurement.uploaded', 'yield_job.started',
+    ]) {
+      expect({ action, recorded: actions.has(action) }).toEqual({ action, recorded: true });
+    }
+  });
+
   it('gives a member of another team nothing of this team, even through their own team id', async () => {
     const other = `/api/teams/${ctx.otherTeamId}`;
     for (const path of [
