@@ -177,6 +177,10 @@ describe('chips, calibration and configuration versions', () => {
     const bad = { ...v1.content, gates: [{ gate: 'g(90,90)e', state: 'cross' as const }] };
     const res = await designer.post(`/api/teams/${teamId}/configurations/${created.id}/versions`).send({ baseVersion: 1, content: bad });
     expect(res.status).toBe(422);
+    const otherShape = { ...v1.content, mesh: { ...v1.content.mesh, shape: { kind: 'hexagon' as const, radius: 1 }, ioSites: [], ports: [] } };
+    const wrongChip = await designer.post(`/api/teams/${teamId}/configurations/${created.id}/versions`).send({ baseVersion: 1, content: otherShape });
+    expect(wrongChip.status).toBe(422);
+    expect(wrongChip.body.issues).toEqual([{ path: 'content.mesh.shape', message: "not the chip's shape" }]);
     expect((await designer.get(`/api/teams/${teamId}/configurations/${created.id}`).expect(200)).body.headVersion).toBe(1);
   });
 });

@@ -71,7 +71,7 @@ export class ConfigurationsService {
   async create(actor: User, teamId: string, chipId: string, body: CreateConfiguration): Promise<ConfigurationDetail> {
     const chip = await this.chips.findRowOrFail(teamId, chipId);
     const content = body.content ?? (emptyConfiguration(chip.definition, 'bar') as ConfigurationFile);
-    this.checkContent(content);
+    this.checkContent(content, chip);
     const id = await this.db.transaction(async (tx) => {
       const [row] = await tx.insert(configurations).values({ teamId, chipId, name: body.name, createdBy: actor.id }).returning();
       if (!row) throw new Error(`ConfigurationsService.create: insert of "${body.name}" returned no row`);
@@ -88,7 +88,7 @@ export class ConfigurationsService {
    */
   async save(actor: User, teamId: string, configurationId: string, body: SaveVersion): Promise<ConfigurationVersion> {
     const configuration = await this.findRowOrFail(teamId, configurationId);
-    this.checkContent(body.content);
+    this.checkContent(body.content, await this.chips.findRowOrFail(teamId, configuration.chipId));
     const saved = await this.db.transaction(async (tx) => {
       const [bumped] = await tx
         .update(configurations)
@@ -156,8 +156,13 @@ export class ConfigurationsService {
     }));
   }
 
-  /** 422 when the content's mesh cannot be built or the configuration breaks the mesh rules. */
-  private checkContent(content: ConfigurationFile): void {
+  /** 422 when the content is for a chip of another shape, its mesh cannot be built, or it breaks the mesh rules. */
+  private checkContent(content: ConfigurationFile, chip: ChipRow): void {
+    if (JSON.stringify(content.mesh.shape) !== JSON.stringify(chip.definition.shape)) {
+      throw new InvalidContentError(`The content is for a mesh of shape ${JSON.stringify(content.mesh.shape)}, but chip "${chip.name}" has ${JSON.stringify(chip.definition.shape)}`, [
+        { path: 'content.mesh.shape', message: 'not the chip\'s shape' },
+      ]);
+    }
     const mesh = buildChipMesh(content.mesh);
     const check = checkConfiguration(mesh, content);
     if (!check.ok) {
