@@ -16,4 +16,8 @@ fi
 
 npm ci --no-audit --no-fund
 npm run build
-npm test
+npm run typecheck
+mkdir -p .artifacts
+npx vitest run --reporter=default --reporter=json --outputFile.json=.artifacts/vitest.json
+# One plain closing line for whoever reads the log.
+node -e 'const r = require("./.artifacts/vitest.json"); console.log(`${r.numPassedTests} passed, ${r.numFailedTests} failed`); process.exit(r.numFailedTests === 0 && r.numPassedTests > 0 ? 0 : 1)'
