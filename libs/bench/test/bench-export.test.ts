@@ -1,5 +1,5 @@
 // The bench export: drive values for every live gate, total power, refusal beyond limits, checksum.
-import { buildMesh, emptyConfiguration, makeMeshDefinition, type Configuration, type MeshDefinition } from '@hexloom/mesh';
+import { buildMesh, DEMO_TECHNOLOGY, emptyConfiguration, makeMeshDefinition, type Configuration, type MeshDefinition } from '@hexloom/mesh';
 import { describe, expect, it } from 'vitest';
 import { BENCH_CAUTIONS, BENCH_EXPORT_CSV_COLUMNS, buildBenchExport, verifyBenchExport, writeBenchExportCsv, type BenchExport } from '../src/index.js';
 
@@ -7,15 +7,7 @@ import { BENCH_CAUTIONS, BENCH_EXPORT_CSV_COLUMNS, buildBenchExport, verifyBench
 const chip: MeshDefinition = makeMeshDefinition({
   name: 'bench test chip',
   shape: { kind: 'rectangle', rows: 2, columns: 2 },
-  technology: {
-    unitLengthUm: 650,
-    groupIndex: 4.2,
-    referenceFrequencyHz: 193.4e12,
-    lossPerGateDb: 0.25,
-    bendLossDb: 0,
-    extinctionDb: 25,
-    phaseShifter: { piPowerW: 0.022, resistanceOhm: 1200, maxPowerW: 0.08, maxVoltageV: 12 },
-  },
+  technology: { ...DEMO_TECHNOLOGY, bendLossDb: 0, phaseShifter: { ...DEMO_TECHNOLOGY.phaseShifter, maxPowerW: 0.08, maxVoltageV: 12 } },
 });
 const gateCount = buildMesh(chip).gates.length;
 const meta = { chip: 'bench test chip', configurationName: 'parked', version: 1, approved: false };

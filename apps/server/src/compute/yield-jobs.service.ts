@@ -54,7 +54,7 @@ export class YieldJobsService implements OnApplicationShutdown {
     });
     const abort = new AbortController();
     this.running.set(row.id, abort);
-    const base = { content: ref.version.content, from, to, offsetsHz, mask: body.mask.regions, tolerance: { couplerSigmaRad: body.couplerSigmaRad, phaseSigmaRad: body.phaseSigmaRad } };
+    const base = { configuration: ref.version.content, from, to, offsetsHz, mask: body.mask.regions, tolerance: { couplerSigmaRad: body.couplerSigmaRad, phaseSigmaRad: body.phaseSigmaRad } };
     void this.run(row.id, chunks.map((chunk) => ({ ...base, chunk })), abort.signal);
     return (await this.toJobs([row]))[0] as YieldJob;
   }

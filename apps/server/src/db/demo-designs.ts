@@ -1,18 +1,10 @@
 /** The invented demo designs: a 12 x 8 mesh chip, its calibration, and three filter specifications. */
 import type { FilterSpec, MeshDefinitionFile, ShifterCalibrationBody } from '@hexloom/contracts';
-import { buildMesh, makeMeshDefinition, type TechnologyProfile, vertexPosition } from '@hexloom/mesh';
+import { buildMesh, DEMO_TECHNOLOGY, makeMeshDefinition, type TechnologyProfile, vertexPosition } from '@hexloom/mesh';
 import { randomStream } from '@hexloom/synth';
 
-/** Invented figures of the demo scenario: 650 um units, n_g 4.2, 0.25 dB per gate, 25 dB extinction, P_pi 22 mW, 1.2 kOhm. */
-export const DEMO_CHIP_TECHNOLOGY: TechnologyProfile = {
-  unitLengthUm: 650,
-  groupIndex: 4.2,
-  referenceFrequencyHz: 193.4e12,
-  lossPerGateDb: 0.25,
-  bendLossDb: 0.05,
-  extinctionDb: 25,
-  phaseShifter: { piPowerW: 0.022, resistanceOhm: 1200, maxPowerW: 0.06, maxVoltageV: 9 },
-};
+/** Invented figures of the demo scenario (one definition in libs/mesh): 650 um units, n_g 4.2, 0.25 dB per gate, 25 dB extinction, P_pi 22 mW, 1.2 kOhm. */
+export const DEMO_CHIP_TECHNOLOGY: TechnologyProfile = DEMO_TECHNOLOGY;
 
 /** Name of the demo chip (invented ground-terminal filter mesh). */
 export const DEMO_CHIP_NAME = 'Kestrel Vale ground-terminal mesh (demo)';
