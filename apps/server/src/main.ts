@@ -22,6 +22,9 @@ function sessionSecret(dataDir: string): string {
 
 async function main(): Promise<void> {
   const root = findRepoRoot();
+  // A .env file at the repository root (see .env.example) fills in what the shell did not set.
+  const envFile = join(root, '.env');
+  if (existsSync(envFile)) process.loadEnvFile(envFile);
   const port = Number(process.env['PORT'] ?? 3000);
   if (!Number.isInteger(port) || port <= 0 || port > 65535) throw new Error(`PORT "${process.env['PORT']}" is not a TCP port`);
   const envDataDir = process.env['HEXLOOM_DATA_DIR'];
