@@ -1,5 +1,6 @@
 // Browser test of the foundation: sign in through the local identity provider as a demo designer,
-// see the team home, open the members page, sign out — against the real server and database.
+// see the team home with the demo chip, open a configuration and its response plot, open the members page,
+// sign out — against the real server and database.
 import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -41,6 +42,27 @@ describe('a demo designer in the browser', () => {
     expect(await page.locator('h1').first().textContent()).toContain('Kestrel Vale RF Photonics');
     expect(await page.getByTestId('team-home').textContent()).toMatch(/designer/i);
     await shot('3-team-home');
+  });
+
+  it("sees the demo chip on the team home with its three configurations and their review status", async () => {
+    const table = page.getByTestId('configurations-table');
+    await table.waitFor();
+    const text = (await table.textContent()) ?? '';
+    for (const name of ['Beam-steering delay set', 'Interferer notch', 'Downlink channel band-pass']) expect(text).toContain(name);
+    for (const status of ['approved', 'in review', 'changes requested']) expect(text).toContain(status);
+    await shot('3b-chips');
+  });
+
+  it('opens a configuration and sees the simulated response of its circuit', async () => {
+    await page.getByRole('link', { name: 'Interferer notch' }).click();
+    await page.getByTestId('configuration-page').waitFor();
+    await page.getByTestId('response-plot').waitFor({ timeout: 60_000 });
+    const d = (await page.getByTestId('plot-amplitude').locator('path').getAttribute('d')) ?? '';
+    // 801 simulated points, every one finite: one move and 800 line segments.
+    expect(d.match(/L/g)?.length).toBe(800);
+    await shot('3c-configuration');
+    await page.getByTestId('nav-home').click();
+    await page.getByTestId('team-home').waitFor();
   });
 
   it('opens the members page and sees every demo member with their role', async () => {

@@ -2,6 +2,7 @@
 import type { RouteObject } from 'react-router';
 import { ROUTES } from './routes.js';
 import { AppLayout } from './modules/shell/components/AppLayout.js';
+import { ConfigurationPage } from './pages/ConfigurationPage.js';
 import { MembersPage } from './pages/MembersPage.js';
 import { NotFoundPage } from './pages/NotFoundPage.js';
 import { RootRedirect } from './pages/RootRedirect.js';
@@ -17,6 +18,7 @@ export const appRoutes: RouteObject[] = [
       { path: ROUTES.root, element: <RootRedirect /> },
       { path: ROUTES.teamHome, element: <TeamHomePage /> },
       { path: ROUTES.teamMembers, element: <MembersPage /> },
+      { path: ROUTES.configuration, element: <ConfigurationPage /> },
     ],
   },
   { path: ROUTES.notFound, element: <NotFoundPage /> },

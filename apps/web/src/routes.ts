@@ -6,6 +6,7 @@ export const ROUTES = {
   signIn: '/signin',
   teamHome: '/t/:teamSlug',
   teamMembers: '/t/:teamSlug/members',
+  configuration: '/t/:teamSlug/configurations/:configurationId',
   notFound: '*',
 } as const;
 
@@ -17,6 +18,11 @@ export function teamHomePath(teamSlug: string): string {
 /** Path of a team's members page. */
 export function teamMembersPath(teamSlug: string): string {
   return `${teamHomePath(teamSlug)}/members`;
+}
+
+/** Path of one configuration of a team. */
+export function configurationPath(teamSlug: string, configurationId: string): string {
+  return `${teamHomePath(teamSlug)}/configurations/${encodeURIComponent(configurationId)}`;
 }
 
 /** Path of the sign-in page that comes back to `returnTo` afterwards. */

@@ -2,10 +2,10 @@
 import { NotFoundState } from '../modules/core/components/NotFoundState.js';
 import { PageSpinner } from '../modules/core/components/PageSpinner.js';
 import { RoleTag } from '../modules/teams/components/RoleTag.js';
-import { TeamHomeEmptyState } from '../modules/teams/components/TeamHomeEmptyState.js';
+import { ChipsOverview } from '../modules/chips/components/ChipsOverview.js';
 import { useCurrentTeam } from '../modules/teams/hooks/useCurrentTeam.js';
 
-/** Team name, the user's role, and what to do next. */
+/** Team name, the user's role, and the team's chips with their configurations (or what to do first). */
 export function TeamHomePage() {
   const { teamSlug, team, isLoading } = useCurrentTeam();
   if (isLoading) return <PageSpinner />;
@@ -18,7 +18,7 @@ export function TeamHomePage() {
           your role <RoleTag role={team.role} />
         </span>
       </header>
-      <TeamHomeEmptyState />
+      <ChipsOverview teamId={team.id} teamSlug={team.slug} />
     </div>
   );
 }

@@ -1,7 +1,7 @@
 // What a team with no chips yet should do next: describe a chip, state a need, synthesise and route.
 import { NonIdealState } from '@blueprintjs/core';
 
-/** Empty state of the team home, without buttons (chip descriptions arrive with the next release). */
+/** Empty state of the team home, without buttons (chips are created through the CLI and the API for now). */
 export function TeamHomeEmptyState() {
   return (
     <NonIdealState
@@ -21,7 +21,10 @@ export function TeamHomeEmptyState() {
               <strong>Synthesise and route</strong> the circuit through free gates, then simulate and review it.
             </li>
           </ol>
-          <p className="hx-muted">Chip descriptions arrive with the next release of Hexloom; until then there is nothing to create here.</p>
+          <p className="hx-muted">
+            Chips are described with <code>npx hexloom mesh</code> and imported through the API (<code>/api/docs</code>); creating them on this
+            page comes with a later release.
+          </p>
         </div>
       }
     />
