@@ -34,3 +34,5 @@ export { readSpectrumCsv, SPECTRUM_CSV_COLUMNS, writeSpectrumCsv } from './spect
 export type { MeasuredSpectrum } from './spectrum-csv.js';
 export { simulateConnection } from './simulate-connection.js';
 export type { ConnectionInput, ConnectionResult } from './simulate-connection.js';
+export { SPECTRUM_FILE_VERSION, toSpectrumFile } from './spectrum-file.js';
+export type { SpectrumFileData } from './spectrum-file.js';

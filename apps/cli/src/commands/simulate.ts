@@ -1,14 +1,13 @@
 /** `hexloom simulate`: the response of a configured chip from one port to another, as CSV, JSON or Touchstone. */
 import { readFileSync, writeFileSync } from 'node:fs';
 import type { Command } from 'commander';
-import { configurationSchema, SPECTRUM_SCHEMA_VERSION, spectrumFileSchema, type SpectrumFile } from '@hexloom/contracts';
+import { configurationSchema, spectrumFileSchema, type SpectrumFile } from '@hexloom/contracts';
 import { buildMesh, type Configuration } from '@hexloom/mesh';
 import {
-  amplitudeDb,
   netlistFromMesh,
-  phaseRad,
   sMatrix,
   simulateConnection,
+  toSpectrumFile,
   writeSpectrumCsv,
   writeTouchstone,
   type ConnectionResult,
@@ -62,33 +61,9 @@ export function emit(text: string, out: string | undefined): void {
   else process.stdout.write(text);
 }
 
-const finiteOrNull = (x: number): number | null => (Number.isFinite(x) ? x : null);
-
-/** The JSON spectrum file of a connection (schema in @hexloom/contracts). */
+/** The JSON spectrum file of a connection, checked against the contracts schema before it is written. */
 export function spectrumFile(result: ConnectionResult): SpectrumFile {
-  const s = result.spectrum;
-  const db = amplitudeDb(s), ph = phaseRad(s);
-  return spectrumFileSchema.parse({
-    schemaVersion: SPECTRUM_SCHEMA_VERSION,
-    kind: 'hexloom-spectrum',
-    from: result.from,
-    to: result.to,
-    referenceFrequencyHz: s.referenceFrequencyHz,
-    unitDelayS: s.unitDelayS,
-    method: s.method,
-    run: result.run,
-    powerBalance: result.powerBalance,
-    points: {
-      frequencyHz: [...s.offsetsHz].map((f) => s.referenceFrequencyHz + f),
-      offsetHz: [...s.offsetsHz],
-      amplitudeDb: [...db].map(finiteOrNull),
-      phaseDeg: [...ph].map((p) => (p * 180) / Math.PI),
-      groupDelayPs: [...s.groupDelayS].map((t) => finiteOrNull(t * 1e12)),
-      dispersionPsPerNm: [...s.dispersionPsPerNm].map(finiteOrNull),
-      re: [...s.re],
-      im: [...s.im],
-    },
-  });
+  return spectrumFileSchema.parse(toSpectrumFile(result));
 }
 
 type SimulateOptions = { from: string; to: string; span?: string; points: string; format: string; out?: string };

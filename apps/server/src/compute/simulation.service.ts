@@ -3,14 +3,13 @@ import { Inject, Injectable } from '@nestjs/common';
 import type { ConfigurationFile, FrequencyGridBody, MaskCheckAnswer, MaskCheckBody, SimulateBody, SpectrumFile } from '@hexloom/contracts';
 import { canonicalJson, sha256Hex } from '@hexloom/bench';
 import type { Mesh } from '@hexloom/mesh';
-import { gridOffsetsHz, netlistFromMesh, simulateConnection, sMatrix, type SMatrix, unitDelayS } from '@hexloom/solver';
+import { gridOffsetsHz, netlistFromMesh, simulateConnection, sMatrix, type SMatrix, toSpectrumFile, unitDelayS } from '@hexloom/solver';
 import { checkMask, responseFigures, simulateTransmission, type Transmission } from '@hexloom/synth';
 import { eq } from 'drizzle-orm';
 import { buildChipMesh } from '../chips/chips.service.js';
 import { DATABASE, type Database } from '../db/database.js';
 import { simulationCache } from '../db/schema/index.js';
 import { resolvePort } from './resolve-port.js';
-import { toSpectrumFile } from './to-spectrum-file.js';
 
 /** Version of the cached answer layout; bump it when the solver's answer changes meaning. */
 const CACHE_LAYOUT = 1;
