@@ -2,13 +2,13 @@
 import type { INestApplication } from '@nestjs/common';
 import { apiErrorSchema } from '@hexloom/contracts';
 import { and, eq } from 'drizzle-orm';
-import request from 'supertest';
+import type request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { invitations, memberships } from '../src/db/schema/index.js';
-import { type Agent, signIn } from './support/sign-in.js';
+import { signInActors, type Actor } from './support/actors.js';
+import type { Agent } from './support/sign-in.js';
 import { auditCount, databaseOf, demoTeamId, startTestApp, userIdOf } from './support/test-app.js';
 
-type Actor = 'anonymous' | 'outsider' | 'viewer' | 'reviewer' | 'designer' | 'owner';
 
 /** Owner last, so a successful destructive call comes after every refused one. */
 const ACTORS: readonly Actor[] = ['anonymous', 'outsider', 'viewer', 'reviewer', 'designer', 'owner'];
@@ -36,13 +36,7 @@ describe('route x role matrix', () => {
 
   beforeAll(async () => {
     sut = await startTestApp();
-    agents.anonymous = request.agent(sut.getHttpServer());
-    agents.owner = (await signIn(sut, { login: 'ilse' })).agent;
-    agents.designer = (await signIn(sut, { login: 'noor' })).agent;
-    agents.reviewer = (await signIn(sut, { login: 'caspar' })).agent;
-    agents.viewer = (await signIn(sut, { login: 'dario' })).agent;
-    agents.outsider = (await signIn(sut, { login: 'zora', name: 'Zora Quill', email: 'zora@elsewhere.example' })).agent;
-    await agents.outsider.post('/api/teams').send({ name: 'Elsewhere Optics' }).expect(201);
+    Object.assign(agents, (await signInActors(sut)).agents);
     ctx.teamId = await demoTeamId(sut);
     ctx.tobinId = await userIdOf(sut, 'tobin');
     ctx.maelleId = await userIdOf(sut, 'maelle');

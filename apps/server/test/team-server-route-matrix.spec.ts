@@ -4,15 +4,15 @@ import type { INestApplication } from '@nestjs/common';
 import { apiErrorSchema } from '@hexloom/contracts';
 import { buildMesh, placeCircuit, type Configuration } from '@hexloom/mesh';
 import { count, eq } from 'drizzle-orm';
-import request from 'supertest';
+import type request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { calibrations, chips, comments, configurations, configurationVersions, measurements, yieldJobs } from '../src/db/schema/index.js';
 import { createChip } from './support/demo-chip.js';
 import { sidePorts } from './support/side-ports.js';
-import { type Agent, signIn } from './support/sign-in.js';
+import { signInActors, type Actor } from './support/actors.js';
+import type { Agent } from './support/sign-in.js';
 import { auditCount, databaseOf, demoTeamId, startTestApp } from './support/test-app.js';
 
-type Actor = 'anonymous' | 'outsider' | 'viewer' | 'reviewer' | 'designer' | 'owner';
 const ACTORS: readonly Actor[] = ['anonymous', 'outsider', 'viewer', 'reviewer', 'designer', 'owner'];
 
 type Ctx = {
@@ -51,13 +51,9 @@ describe('team-server route x role matrix', () => {
 
   beforeAll(async () => {
     sut = await startTestApp();
-    agents.anonymous = request.agent(sut.getHttpServer());
-    agents.owner = (await signIn(sut, { login: 'ilse' })).agent;
-    agents.designer = (await signIn(sut, { login: 'noor' })).agent;
-    agents.reviewer = (await signIn(sut, { login: 'caspar' })).agent;
-    agents.viewer = (await signIn(sut, { login: 'dario' })).agent;
-    agents.outsider = (await signIn(sut, { login: 'zora', name: 'Zora Quill', email: 'zora@elsewhere.example' })).agent;
-    ctx.otherTeamId = (await agents.outsider.post('/api/teams').send({ name: 'Elsewhere Optics' }).expect(201)).body.id as string;
+    const actors = await signInActors(sut);
+    Object.assign(agents, actors.agents);
+    ctx.otherTeamId = actors.otherTeamId;
     ctx.teamId = await demoTeamId(sut);
     const chip = await createChip(agents.owner, ctx.teamId, 'matrix chip', 2, 3);
     ctx.chipId = chip.id;

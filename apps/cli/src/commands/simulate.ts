@@ -1,5 +1,5 @@
 /** `hexloom simulate`: the response of a configured chip from one port to another, as CSV, JSON or Touchstone. */
-import { readFileSync, writeFileSync } from 'node:fs';
+import { writeFileSync } from 'node:fs';
 import type { Command } from 'commander';
 import { configurationSchema, spectrumFileSchema, type SpectrumFile } from '@hexloom/contracts';
 import { buildMesh, type Configuration } from '@hexloom/mesh';
@@ -15,22 +15,12 @@ import {
   type MeshNetlist,
 } from '@hexloom/solver';
 import { CliError } from '../cli-error.js';
+import { readJsonFile } from './mesh.js';
 
 /** Reads, checks and compiles a configuration file into a solver netlist (every gate of the chip). */
 export function loadChip(path: string): MeshNetlist {
-  let json: unknown;
+  const configuration = readJsonFile(path, configurationSchema, 'configuration') as Configuration;
   try {
-    json = JSON.parse(readFileSync(path, 'utf8'));
-  } catch (error) {
-    throw new CliError(`cannot read configuration ${path}: ${(error as Error).message}`);
-  }
-  const parsed = configurationSchema.safeParse(json);
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0];
-    throw new CliError(`${path} is not a configuration file: ${issue?.path.join('.') ?? ''} ${issue?.message ?? ''}`.trim());
-  }
-  try {
-    const configuration = parsed.data as Configuration;
     return netlistFromMesh({ mesh: buildMesh(configuration.mesh), configuration });
   } catch (error) {
     throw new CliError((error as Error).message);
