@@ -2,13 +2,19 @@
 import { randomStream, type RandomStream } from './seeded-normal.js';
 import { SynthInputError } from './synth-input-error.js';
 
-/** One slice of a study: runs `start .. start + count - 1`, drawn from stream `index` of the seed. */
+/**
+ * One slice of a study: runs `start .. start + count - 1` of the study seeded with `seed`; `index` is the chunk's
+ * place in the plan. Each run draws from its own stream (seed, run index), so the slicing never changes a run.
+ */
 export type MonteCarloChunk = { index: number; seed: number; start: number; count: number };
 
 /** What one run reports: whether it met the mask, and its figures by name. */
 export type MonteCarloRun = { pass: boolean; figures: Record<string, number> };
 
-/** Splits `runs` into chunks of at most `chunkSize` (each with its own independent random stream). */
+/**
+ * Splits `runs` into chunks of at most `chunkSize`, for progress and worker threads. Results do not depend on
+ * `chunkSize`: run r draws from `randomStream(seed, r)` in whichever chunk it falls.
+ */
 export function planMonteCarlo({ runs, seed, chunkSize }: { runs: number; seed: number; chunkSize: number }): MonteCarloChunk[] {
   if (!(Number.isInteger(runs) && runs >= 1 && runs <= 1_000_000)) throw new SynthInputError(`synth: runs must be 1..1000000, got ${runs}`);
   if (!(Number.isInteger(chunkSize) && chunkSize >= 1)) throw new SynthInputError(`synth: chunkSize must be a positive integer, got ${chunkSize}`);
@@ -18,12 +24,15 @@ export function planMonteCarlo({ runs, seed, chunkSize }: { runs: number; seed: 
   return chunks;
 }
 
-/** Runs one chunk; `onProgress(done, count)` after every run. Same chunk, same results, on any thread. */
+/**
+ * Runs one chunk, giving run `chunk.start + k` its own stream `randomStream(chunk.seed, chunk.start + k)`;
+ * `onProgress(done, count)` after every run. A run gives the same result in any chunk, on any thread.
+ */
 export function runMonteCarloChunk(chunk: MonteCarloChunk, trial: (random: RandomStream, runIndex: number) => MonteCarloRun, onProgress?: (done: number, count: number) => void): MonteCarloRun[] {
-  const random = randomStream(chunk.seed, chunk.index);
   const results: MonteCarloRun[] = [];
   for (let k = 0; k < chunk.count; k++) {
-    results.push(trial(random, chunk.start + k));
+    const runIndex = chunk.start + k;
+    results.push(trial(randomStream(chunk.seed, runIndex), runIndex));
     onProgress?.(k + 1, chunk.count);
   }
   return results;

@@ -15,7 +15,7 @@ export type YieldChunkTask = {
   chunk: MonteCarloChunk;
 };
 
-/** Runs the chunk's seeded runs; the same task gives the same runs on any thread. */
+/** Runs the chunk's seeded runs; a run gives the same result in any chunk and on any thread. */
 export function runYieldChunk(task: YieldChunkTask): MonteCarloRun[] {
   const mesh = buildMesh(task.configuration.mesh);
   const trial = yieldTrial({ mesh, configuration: task.configuration, from: task.from, to: task.to, offsetsHz: task.offsetsHz, mask: task.mask, tolerance: task.tolerance });
