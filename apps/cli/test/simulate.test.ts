@@ -1,5 +1,8 @@
 // `hexloom simulate` and `hexloom sparams` on the example configuration, read back by the solver's own readers.
 import { execFileSync, spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { sParametersFileSchema, spectrumFileSchema } from '@hexloom/contracts';
@@ -33,6 +36,14 @@ describe('hexloom simulate', () => {
     expect(t.frequenciesHz.length).toBe(64);
     // Reciprocity S21 = S12 (Pozar, Microwave Engineering, sec. 4.3).
     expect(t.re[2]!).toBeCloseTo(t.re[1]!, 9);
+  }, 60_000);
+
+  it('writes the CSV to the file named by -o and nothing to stdout', () => {
+    const file = join(mkdtempSync(join(tmpdir(), 'hexloom-cli-simulate-')), 'ring.csv');
+    const r = spawnSync('npx', ['--no-install', 'hexloom', 'simulate', CONFIG, '--from', 'in', '--to', 'out', '--points', '64', '-o', file], { cwd: repoRoot, encoding: 'utf8' });
+    expect(r.status, r.stderr).toBe(0);
+    expect(r.stdout).toBe('');
+    expect(readSpectrumCsv(readFileSync(file, 'utf8')).frequenciesHz.length).toBe(64);
   }, 60_000);
 
   it('names an unknown port and exits with status 1', () => {

@@ -52,6 +52,60 @@ describe('writeTouchstone', () => {
   it('refuses frequencies that do not increase', () => {
     expect(() => writeTouchstone(sample(1, [2e9, 1e9]))).toThrow(/increase strictly/);
   });
+
+  it('refuses S values that are not finite, naming the value', () => {
+    const data = sample(2, [1e9]);
+    data.re[3] = Number.NaN;
+    expect(() => writeTouchstone(data)).toThrow(/S values must be finite, got NaN \+ .*j at flat index 3/);
+  });
+
+  it('writes an exact zero in DB as the -400 dB floor, which the reader takes back as a magnitude of 1e-20', () => {
+    // Touchstone 1.1 and 2.0 spec (IBIS Open Forum), "Option Line": DB is 20 log10 |S| and an angle in degrees, and
+    // every network data entry is a number, so -Infinity is not allowed. The floor of -400 dB is Hexloom's choice.
+    for (const version of ['1.1', '2.0'] as const) {
+      const data = sample(2, [1e9, 2e9]);
+      data.re[1] = 0; // S12 at 1 GHz
+      data.im[1] = 0;
+      const text = writeTouchstone(data, { version, format: 'DB' });
+      expect(text).not.toMatch(/Infinity|NaN/);
+      // Order N11 N21 N12 N22: the dB of N12 is the fifth number of the record.
+      expect(dataLines(text)[0]!.split(' ')[5]).toBe('-400');
+      const back = readTouchstone(text, { fileName: 'zero.s2p' });
+      expect(Math.hypot(back.re[1]!, back.im[1]!)).toBeCloseTo(1e-20, 30); // 10^(-400/20)
+      expect(Math.hypot(back.re[2]!, back.im[2]!)).toBeCloseTo(Math.hypot(data.re[2]!, data.im[2]!), 10);
+    }
+  });
+
+  it('keeps the frequencies of a 1 kHz grid at a 193.4 THz carrier distinct and exact when written in GHz', () => {
+    // Touchstone 1.1 and 2.0 spec (IBIS Open Forum), "Network Data": frequencies in strictly increasing order.
+    // The grid sits half a step off the carrier, where 12 significant digits (1 kHz in GHz) round neighbours together.
+    const frequencies = Array.from({ length: 201 }, (_, k) => 193.4e12 + 500 + k * 1e3);
+    expect(new Set(frequencies.map((f) => (f / 1e9).toPrecision(12))).size).toBeLessThan(frequencies.length);
+    for (const version of ['1.1', '2.0'] as const) {
+      const back = readTouchstone(writeTouchstone(sample(1, frequencies), { version, frequencyUnit: 'GHZ' }), { fileName: 'fine.s1p' });
+      expect(back.frequenciesHz.length).toBe(frequencies.length);
+      back.frequenciesHz.forEach((f, i) => {
+        expect(Math.abs(f - frequencies[i]!)).toBeLessThanOrEqual(1e-3);
+        if (i > 0) expect(f).toBeGreaterThan(back.frequenciesHz[i - 1]!);
+      });
+    }
+  });
+
+  it('writes each frequency of an uneven fine grid to within a thousandth of its step', () => {
+    const step = 1234.5678;
+    const frequencies = Array.from({ length: 300 }, (_, k) => 193.4e12 + 0.37 * step + k * step + (k % 7) * 0.1 * step);
+    const back = readTouchstone(writeTouchstone(sample(1, frequencies), { frequencyUnit: 'GHZ' }), { fileName: 'uneven.s1p' });
+    back.frequenciesHz.forEach((f, i) => expect(Math.abs(f - frequencies[i]!)).toBeLessThanOrEqual(step / 1000));
+  });
+
+  it('refuses two frequencies that no 17-digit number in GHz can tell apart, and writes them in HZ', () => {
+    // Adjacent doubles near 270 THz (0.03125 Hz apart) that divide by 1e9 to the same double (IEEE 754 rounding).
+    const a = 2.7e14 + 0.03125, b = 2.7e14 + 0.0625;
+    expect(a / 1e9).toBe(b / 1e9);
+    expect(() => writeTouchstone(sample(1, [a, b]), { frequencyUnit: 'GHZ' })).toThrow(/270000000000000.03 and 270000000000000.06 Hz cannot be told apart in GHZ/);
+    const back = readTouchstone(writeTouchstone(sample(1, [a, b]), { frequencyUnit: 'HZ' }), { fileName: 'close.s1p' });
+    expect([...back.frequenciesHz]).toEqual([a, b]);
+  });
 });
 
 describe('readTouchstone', () => {

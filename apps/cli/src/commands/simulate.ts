@@ -68,7 +68,7 @@ export function registerSimulateCommand(program: Command): void {
     .option('--span <start:stop>', 'frequency offsets from the reference, GHz (default: one whole unit FSR)')
     .option('--points <n>', 'number of frequency points', '1024')
     .option('--format <format>', 'csv, json or s2p (Touchstone 1.1 between --from and --to)', 'csv')
-    .option('--out <file>', 'write to a file instead of stdout')
+    .option('-o, --out <file>', 'write to a file instead of stdout')
     .action((path: string, options: SimulateOptions) => {
       const chip = loadChip(path);
       const from = resolvePort(chip, options.from), to = resolvePort(chip, options.to);
