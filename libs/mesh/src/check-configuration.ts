@@ -1,5 +1,6 @@
 /** Lists every violation of a configuration: shared waveguides, inconsistent states, dead gates, ports, breaks. */
 import type { Configuration } from './configuration.js';
+import { gateNeeds } from './gate-needs.js';
 import { gatePortLabel, type Mesh } from './mesh.js';
 import { resolveCircuit, stepStateAndChannel, type ResolvedCircuit } from './resolve-circuit.js';
 import { violation, type Violation } from './violation.js';
@@ -99,7 +100,10 @@ export function checkConfiguration(mesh: Mesh, configuration: Configuration): Ch
         out.push(violation('waveguide-used-twice', `waveguide ${ch === 0 ? 'a' : 'b'} of gate ${gid} is used ${onCh.length} times (${onCh.map((u) => u.circuit).join(', ')})`, { circuits: [...new Set(onCh.map((u) => u.circuit))], gates: [gid] }));
     }
     const states = new Set(list.map((u) => u.state));
-    if (states.size > 1) out.push(violation('inconsistent-state', `gate ${gid} is asked to be both bar and cross (${circuits.join(', ')})`, { circuits, gates: [gid] }));
+    if (states.size > 1) {
+      const shared = circuits.length > 1;
+      out.push(violation(shared ? 'shared-gate-conflict' : 'inconsistent-state', `gate ${gid} is asked to be both bar and cross (${circuits.join(', ')})${shared ? ': its two waveguides belong to circuits that need different states' : ''}`, { circuits, gates: [gid] }));
+    }
     if (!couplerOwner.has(g)) required.set(g, { state: STATE_NAME[list[0]!.state], circuit: list[0]!.circuit });
   }
   // The gate settings must realise what the circuits need; idle gates sit in the parked state.
@@ -123,8 +127,34 @@ export function checkConfiguration(mesh: Mesh, configuration: Configuration): Ch
         }),
       );
   }
+  // Outer phases: a circuit may set one only on the waveguide it acts on, and the setting must hold it.
+  const { needs, conflicts } = gateNeeds(mesh, resolved);
+  for (const c of conflicts)
+    if (c.kind === 'phase') {
+      const gates = c.gate >= 0 ? [mesh.gates[c.gate]!.id] : [];
+      out.push(violation(c.circuits.length > 1 ? 'shared-gate-conflict' : 'ineffective-phase', c.message, { circuits: [...c.circuits], gates }));
+    }
+  for (const need of needs.values()) {
+    if (need.phaseRad === undefined) continue;
+    const gid = mesh.gates[need.gate]!.id;
+    const have = settings.get(need.gate)?.phaseRad ?? 0;
+    if (Math.abs(wrapPhase(have - need.phaseRad)) <= 1e-9) continue;
+    const shared = need.circuits.length > 1;
+    out.push(
+      violation(shared ? 'shared-gate-conflict' : 'inconsistent-state', `gate ${gid}${shared ? ` (shared by ${need.circuits.join(' and ')})` : ''} has outer phase ${have} rad but circuit ${need.phaseOwner} needs ${need.phaseRad} rad`, {
+        circuits: [...need.circuits],
+        gates: [gid],
+      }),
+    );
+  }
   for (const [g, s] of settings)
     if (s.circuit !== undefined && !required.has(g))
       out.push(violation('stale-setting', `gate ${s.gate} is still set for circuit ${s.circuit}, which does not use it`, { circuits: [s.circuit], gates: [s.gate] }));
   return { ok: out.length === 0, violations: out };
+}
+
+/** A phase difference wrapped into (-pi, pi]. */
+function wrapPhase(x: number): number {
+  const t = x % (2 * Math.PI);
+  return t > Math.PI ? t - 2 * Math.PI : t <= -Math.PI ? t + 2 * Math.PI : t;
 }

@@ -39,6 +39,12 @@ export type CouplerGate = {
 
 export type CircuitKind = 'path' | 'delay-line' | 'ring' | 'add-drop-ring' | 'coupled-rings' | 'mzi' | 'mzi-lattice' | 'splitter-tree' | 'rings-on-bus';
 
+/**
+ * A phase shifter a circuit sets on a gate it traverses in bar or cross: the gate's outer phase, which acts on
+ * the light of one of the gate's two waveguides only (see `phasedChannel`), so it belongs to that circuit.
+ */
+export type PhaseSetting = { readonly gate: GateId; readonly phaseRad: number };
+
 /** A circuit placed on the chip. */
 export type Circuit = {
   readonly id: string;
@@ -47,6 +53,8 @@ export type Circuit = {
   readonly ports: readonly PortId[];
   readonly paths: readonly CircuitPath[];
   readonly couplers: readonly CouplerGate[];
+  /** Outer phases the circuit sets on gates it traverses (loop tuning, lattice arm phases). */
+  readonly phases?: readonly PhaseSetting[] | undefined;
   /** Optional region (cell ids) the circuit was asked to stay inside. */
   readonly region?: readonly string[] | undefined;
 };

@@ -3,7 +3,9 @@ import { crossKappa, draftToCircuit, gateTerminal, portTerminal, type CircuitDra
 import type { Circuit, CircuitKind } from './configuration.js';
 import type { GateSetting } from './gate-state.js';
 import type { Mesh } from './mesh.js';
-import { resolveCircuit, stepStateAndChannel } from './resolve-circuit.js';
+import { gateNeeds } from './gate-needs.js';
+import { resolveCircuit } from './resolve-circuit.js';
+import { settingOfNeed } from './settle-gates.js';
 import { routeAddDrop } from './route-add-drop.js';
 import { routeCoupledRings } from './route-coupled-rings.js';
 import { routeFailure, type RouteFailure } from './route-failure.js';
@@ -77,17 +79,9 @@ function route(mesh: Mesh, space: RouteSpace, r: RouteRequest, port: Map<string,
   }
 }
 
-/** The settings that realise a circuit: bar/cross of every traversed gate, split (kappa, phase) of every coupler. */
+/** The settings that realise a circuit: bar/cross of every traversed gate with its phase shifters, split (kappa, phase) of every coupler. */
 export function circuitSettings(mesh: Mesh, circuit: Circuit): GateSetting[] {
-  const r = resolveCircuit(mesh, circuit);
-  const out = new Map<string, GateSetting>();
-  for (const p of r.paths)
-    for (const s of p.steps) {
-      const id = mesh.gates[s.gate]!.id;
-      if (!out.has(id)) out.set(id, { gate: id, state: stepStateAndChannel(s.inPort, s.outPort).state === 0 ? 'bar' : 'cross', circuit: circuit.id });
-    }
-  for (const c of circuit.couplers) out.set(c.gate, { gate: c.gate, state: 'split', kappa: c.kappa, phaseRad: c.phaseRad, circuit: circuit.id });
-  return [...out.values()];
+  return [...gateNeeds(mesh, [circuit]).needs.values()].map((n) => settingOfNeed(mesh, n));
 }
 
 /**

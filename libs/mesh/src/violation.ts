@@ -11,7 +11,9 @@ export type ViolationCode =
   | 'port-used-twice'
   | 'coupler-misuse'
   | 'outside-region'
-  | 'stale-setting';
+  | 'stale-setting'
+  | 'shared-gate-conflict'
+  | 'ineffective-phase';
 
 /** One violation: a code, a sentence, and the circuits, gates and ports involved. */
 export type Violation = {

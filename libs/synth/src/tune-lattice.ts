@@ -3,6 +3,7 @@ import type { Circuit, CircuitPath, Configuration, GatePortLabel, GateSetting } 
 import { cArg, cDiv, cMul, cx, type Complex } from './complex.js';
 import { gateElement, phaseActsOn, settingLookup } from './gate-element.js';
 import type { LatticeParameters } from './lattice-response.js';
+import { setCircuitPhases } from './set-circuit-phases.js';
 import { SynthInputError } from './synth-input-error.js';
 
 type Matrix = [[Complex, Complex], [Complex, Complex]];
@@ -87,6 +88,7 @@ export function tuneLattice(configuration: Configuration, circuit: Circuit, desi
     return k === 0 ? swapRows(m) : k === n ? swapColumns(m) : swapRows(swapColumns(m));
   };
   const target = canonicalLattice(design);
+  const phases: { gate: string; phaseRad: number }[] = [];
   const parts = Array.from({ length: n + 1 }, (_, k) => decompose(canonical(k)));
   for (let k = 1; k <= n; k++) {
     const short = arms[2 * (k - 1)]!;
@@ -98,7 +100,8 @@ export function tuneLattice(configuration: Configuration, circuit: Circuit, desi
     // exp(-j phi_target) = R(0) exp(j psi)  =>  psi = -phi_target - arg R(0).
     const psi = wrap(-(target.phases[k - 1] as number) - cArg(r));
     const current = lookup(tuner.gate);
-    updated.set(tuner.gate, { ...current, phaseRad: psi, circuit: current.circuit ?? circuit.id });
+    updated.set(tuner.gate, { ...current, phaseRad: psi });
+    phases.push({ gate: tuner.gate, phaseRad: psi });
   }
-  return { ...configuration, gates: [...updated.values()] };
+  return setCircuitPhases(configuration, circuit.id, phases);
 }

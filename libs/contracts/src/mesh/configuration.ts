@@ -35,6 +35,9 @@ export const couplerGateSchema = z.object({
   phaseRad: z.number(),
 });
 
+/** An outer phase a circuit sets on a gate it traverses in bar or cross (acts on that circuit's waveguide only). */
+export const phaseSettingSchema = z.object({ gate: gateIdSchema, phaseRad: z.number().finite() });
+
 export const circuitKindSchema = z.enum(['path', 'delay-line', 'ring', 'add-drop-ring', 'coupled-rings', 'mzi', 'mzi-lattice', 'splitter-tree', 'rings-on-bus']);
 
 export const circuitSchema = z.object({
@@ -43,6 +46,7 @@ export const circuitSchema = z.object({
   ports: z.array(portIdSchema),
   paths: z.array(circuitPathSchema),
   couplers: z.array(couplerGateSchema),
+  phases: z.array(phaseSettingSchema).optional(),
   region: z.array(cellIdSchema).optional(),
 });
 
