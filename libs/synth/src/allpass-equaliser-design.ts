@@ -13,6 +13,8 @@ export type AllPassEqualiserInput = {
   targetDelayS: (frequencyHz: number) => number;
   /** Constant delay the fit may add or remove (the bus path); true to fit only the shape. */
   freeOffset: boolean;
+  /** Round-trip field amplitude a of each ring (1 for lossless; the chip's loss lowers and widens the delay peaks). */
+  roundTripAmplitude?: number;
 };
 
 export type AllPassEqualiser = {
@@ -24,18 +26,26 @@ export type AllPassEqualiser = {
   maxErrorS: number;
 };
 
+/** d/dphi of arg(1 - c e^{-j phi}) for real c: c (cos phi - c) / (1 - 2 c cos phi + c^2). */
+const argSlope = (c: number, phi: number): number => (c * (Math.cos(phi) - c)) / (1 - 2 * c * Math.cos(phi) + c * c);
+
 /**
- * Group delay of a lossless all-pass ring: T (1 - r^2) / (1 - 2 r cos(phi) + r^2), phi = 2 pi (f - f_res) T
- * (Madsen & Zhao, Optical Filter Design and Analysis, 1999, ch. 6, single-stage all-pass delay).
+ * Group delay of an all-pass ring H = (r - a e^{-j phi}) / (1 - r a e^{-j phi}), phi = 2 pi (f - f_res) T:
+ * tau = T [s(r a) - s(a / r)] with s(c) = c (cos phi - c) / (1 - 2 c cos phi + c^2), from the phase of the ring
+ * transmission (Yariv, Electron. Lett. 36(4), 2000). For a lossless ring (a = 1) it is
+ * T (1 - r^2) / (1 - 2 r cos(phi) + r^2) (Madsen & Zhao, Optical Filter Design and Analysis, 1999, ch. 6).
  */
-export function allPassStageDelayS(r: number, ringDelayS: number, frequencyHz: number, resonanceHz: number): number {
+export function allPassStageDelayS(r: number, ringDelayS: number, frequencyHz: number, resonanceHz: number, roundTripAmplitude = 1): number {
   const phi = 2 * Math.PI * (frequencyHz - resonanceHz) * ringDelayS;
-  return (ringDelayS * (1 - r * r)) / (1 - 2 * r * Math.cos(phi) + r * r);
+  const a = roundTripAmplitude;
+  if (a === 1) return (ringDelayS * (1 - r * r)) / (1 - 2 * r * Math.cos(phi) + r * r);
+  return ringDelayS * (argSlope(r * a, phi) - argSlope(a / r, phi));
 }
 
 /** Least-squares fit of the stage couplings and resonances to the target delay on 64 points of the band (Nelder–Mead). */
 export function designAllPassEqualiser(input: AllPassEqualiserInput): AllPassEqualiser {
   const { stages, ringDelayS, bandHz, targetDelayS, freeOffset } = input;
+  const a = input.roundTripAmplitude ?? 1;
   if (!(Number.isInteger(stages) && stages >= 1 && stages <= 6)) throw new SynthInputError(`synth: stages must be 1..6, got ${stages}`);
   const [lo, hi] = bandHz;
   if (!(hi > lo)) throw new SynthInputError(`synth: the band must have toHz above fromHz, got ${lo}..${hi}`);
@@ -49,7 +59,7 @@ export function designAllPassEqualiser(input: AllPassEqualiserInput): AllPassEqu
       const r = 1 / (1 + Math.exp(-(x[2 * k] as number)));
       return { selfCoupling: r, powerCoupling: 1 - r * r, resonanceOffsetHz: lo + (x[2 * k + 1] as number) * (hi - lo) };
     });
-  const delays = (st: AllPassStage[]): number[] => grid.map((f) => st.reduce((s, stage) => s + allPassStageDelayS(stage.selfCoupling, ringDelayS, f, stage.resonanceOffsetHz), 0));
+  const delays = (st: AllPassStage[]): number[] => grid.map((f) => st.reduce((s, stage) => s + allPassStageDelayS(stage.selfCoupling, ringDelayS, f, stage.resonanceOffsetHz, a), 0));
   const residual = (st: AllPassStage[]): { offset: number; errors: number[] } => {
     const d = delays(st);
     const offset = freeOffset ? d.reduce((s, v, i) => s + v - (target[i] as number), 0) / d.length : 0;

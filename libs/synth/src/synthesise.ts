@@ -1,21 +1,19 @@
 /** Specification -> design -> placement on the free part of the chip -> tuning -> simulation -> mask check. */
 import type { FilterSpec } from '@hexloom/contracts';
-import { placeCircuit, routeCircuit, type Circuit, type Configuration, type Mesh, type RouteRequest } from '@hexloom/mesh';
-import type { ImpulseOptions } from '@hexloom/solver';
+import { placeCircuit, type Circuit, type Configuration, type Mesh, type RouteRequest } from '@hexloom/mesh';
+import { netlistFromMesh, type ImpulseOptions } from '@hexloom/solver';
 import { alignCouplers } from './align-couplers.js';
-import { checkMask, type MaskReport } from './check-mask.js';
-import { chooseDelayUnits } from './delay-design.js';
 import { designCircuit, type CircuitDesign } from './design-circuit.js';
-import type { MaskRegion } from './mask-types.js';
+import { placeDelayLine, placeDelaySet } from './place-delays.js';
 import type { RealisationNote } from './realisation-note.js';
-import { responseFigures, type ResponseFigures } from './response-figures.js';
-import { simulateTransmission, type Transmission } from './simulate-transmission.js';
 import { SynthInputError } from './synth-input-error.js';
 import { tuneLattice } from './tune-lattice.js';
 import { tuneLoops, type LoopTuning } from './tune-loops.js';
-import { verificationOffsets } from './verification-grid.js';
+import { quietParking } from './quiet-parking.js';
+import { rebalanceSplitters } from './rebalance-splitters.js';
+import { verificationCost, verifyCircuit, type Verdict, type Verification, type VerifyInput } from './verify-circuit.js';
 
-export type Verification = { from: string; to: string; response: Transmission; mask: MaskReport; figures: ResponseFigures };
+export type { Verification } from './verify-circuit.js';
 
 export type SynthesisSuccess = {
   ok: true;
@@ -26,7 +24,12 @@ export type SynthesisSuccess = {
   design: CircuitDesign;
   notes: RealisationNote[];
   tunings: LoopTuning[];
+  /** Every output of the circuit, simulated on the whole chip, with its mask and target checks and figures. */
   verification: Verification[];
+  /** Passes only when every check of every output does; an unmet target is a failed verdict, never a silent pass. */
+  verdict: Verdict;
+  /** Delay sets: the base delay of output 0 the checks used (the spec's, or fitted when it left the base free), ps. */
+  basePs?: number;
 };
 
 export type SynthesisFailure = { ok: false; reason: string; message: string; notes: RealisationNote[] };
@@ -37,8 +40,10 @@ const failure = (reason: string, message: string, notes: RealisationNote[] = [])
 
 /**
  * Designs the circuit of `spec`, places it through the mesh router on what `configuration` leaves free (inside the
- * spec's region, if any), tunes every loop to the requested centre, then simulates the whole chip and checks the mask.
- * Impossible requests (no route, wrong parity, a band the loss does not allow) come back as `{ ok: false }` with a reason.
+ * spec's region, if any), tunes every loop to the requested centre, then simulates the whole chip from the input to
+ * every output and checks each against the mask regions that apply to it and the spec's own targets (`verdict`).
+ * Impossible requests (no route, wrong parity, a delay set no whole-unit lengths can meet, a band the loss does not
+ * allow) come back as `{ ok: false }` with a reason; a placed circuit that misses a target is `ok` with a failed verdict.
  */
 export function synthesise({ spec, mesh, configuration, circuitId, impulse }: SynthesiseInput): SynthesisSuccess | SynthesisFailure {
   const body = spec.spec;
@@ -56,55 +61,22 @@ export function synthesise({ spec, mesh, configuration, circuitId, impulse }: Sy
   const place = (request: RouteRequest) => placeCircuit(configuration, request, mesh);
 
   let placed: { configuration: Configuration; circuit: Circuit } | SynthesisFailure;
-  let outputs: { from: string; to: string }[];
   let centres: number[] = [];
   let couplerKappas: number[] = [];
+  const delayArgs = { mesh, configuration, circuitId, region, unitDelayS };
   switch (design.kind) {
     case 'delay-line': {
       if (body.kind !== 'delay-line') throw new Error('unreachable');
-      const shortest = routeCircuit(mesh, configuration.circuits, { kind: 'path', id: circuitId, from: body.from, to: body.to, ...region });
-      if (!shortest.ok) return failure(shortest.reason, shortest.message);
-      const choice = chooseDelayUnits({ requestedS: design.delayS, unitDelayS, minUnits: shortest.pathLengthsUnits[0] ?? 0, toleranceS: design.toleranceS });
-      if (choice.errorS !== 0) notes.push({ quantity: 'delay', requested: design.delayS * 1e12, achieved: choice.achievedS * 1e12, unit: 'ps', note: `${choice.units} units: paths between these ports have ${choice.units % 2 === 0 ? 'even' : 'odd'} lengths of at least ${shortest.pathLengthsUnits[0]} units${choice.withinTolerance ? '' : '; outside the tolerance'}` });
-      const r = place({ kind: 'delay-line', id: circuitId, from: body.from, to: body.to, lengthUnits: choice.units, ...region });
+      const r = placeDelayLine(delayArgs, design, body.from, body.to);
+      notes.push(...r.notes);
       placed = r.ok ? r : failure(r.reason, r.message, notes);
-      outputs = [{ from: body.from, to: body.to }];
       break;
     }
     case 'ttd-set': {
       if (body.kind !== 'ttd-set') throw new Error('unreachable');
-      const minima: number[] = [];
-      for (const port of body.outputs) {
-        const r = routeCircuit(mesh, configuration.circuits, { kind: 'path', id: circuitId, from: body.from, to: port, ...region });
-        if (!r.ok) return failure(r.reason, r.message);
-        minima.push(r.pathLengthsUnits[0] ?? 0);
-      }
-      const stepUnits = design.stepS / unitDelayS;
-      const shortestBase = Math.max(...minima.map((m, k) => m - k * stepUnits));
-      // Branches leave a shared trunk, so each needs more than its own shortest path; add common delay until the
-      // tree fits (every output keeps the same relative delays), unless the spec fixed the base.
-      const extras = design.baseS !== undefined ? [0] : [2, 6, 10, 16, 24, 34, 48];
-      let lastFailure: SynthesisFailure | undefined;
-      placed = failure('not-enough-free-area', 'no splitter tree tried');
-      for (const extra of extras) {
-        const base = design.baseS !== undefined ? design.baseS / unitDelayS : shortestBase + extra;
-        const attemptNotes: RealisationNote[] = [];
-        const delays = body.outputs.map((port, k) => {
-          const choice = chooseDelayUnits({ requestedS: (base + k * stepUnits) * unitDelayS, unitDelayS, minUnits: minima[k] as number, toleranceS: design.toleranceS });
-          if (Math.abs(choice.errorS) > 1e-15) attemptNotes.push({ quantity: `delay to ${port}`, requested: (base + k * stepUnits) * unitDelayS * 1e12, achieved: choice.achievedS * 1e12, unit: 'ps', note: `${choice.units} units (whole units of the right parity)` });
-          return { port, delayUnits: choice.units };
-        });
-        const r = place({ kind: 'splitter-tree', id: circuitId, from: body.from, outputs: delays, ...region });
-        if (r.ok) {
-          notes.push(...attemptNotes);
-          placed = r;
-          lastFailure = undefined;
-          break;
-        }
-        lastFailure = failure(r.reason, r.message, notes);
-      }
-      if (lastFailure) placed = lastFailure;
-      outputs = body.outputs.map((to) => ({ from: body.from, to }));
+      const r = placeDelaySet(delayArgs, design, body.from, body.outputs);
+      notes.push(...r.notes);
+      placed = r.ok ? r : failure(r.reason, r.message, notes);
       break;
     }
     case 'ring-notch': {
@@ -113,7 +85,6 @@ export function synthesise({ spec, mesh, configuration, circuitId, impulse }: Sy
       centres = [design.centreOffsetHz];
       const r = place({ kind: 'ring', id: circuitId, from: body.from, to: body.to, perimeterUnits: design.perimeterUnits, kappa: design.ring.powerCoupling, ...region });
       placed = r.ok ? r : failure(r.reason, r.message, notes);
-      outputs = [{ from: body.from, to: body.to }];
       break;
     }
     case 'add-drop': {
@@ -122,7 +93,6 @@ export function synthesise({ spec, mesh, configuration, circuitId, impulse }: Sy
       centres = [design.centreOffsetHz];
       const r = place({ kind: 'add-drop-ring', id: circuitId, from: body.from, to: body.through, drop: body.drop, perimeterUnits: design.perimeterUnits, kappa: design.ring.powerCoupling, ...region });
       placed = r.ok ? r : failure(r.reason, r.message, notes);
-      outputs = [{ from: body.from, to: body.drop }, { from: body.from, to: body.through }];
       break;
     }
     case 'coupled-ring-bandpass': {
@@ -131,7 +101,6 @@ export function synthesise({ spec, mesh, configuration, circuitId, impulse }: Sy
       centres = couplerKappas.slice(1).map(() => design.centreOffsetHz);
       const r = place({ kind: 'coupled-rings', id: circuitId, from: body.from, to: body.through, drop: body.to, rings: body.order, kappas: couplerKappas, ...region });
       placed = r.ok ? r : failure(r.reason, r.message, notes);
-      outputs = [{ from: body.from, to: body.to }, { from: body.from, to: body.through }];
       break;
     }
     case 'mzi-lattice': {
@@ -142,7 +111,6 @@ export function synthesise({ spec, mesh, configuration, circuitId, impulse }: Sy
       const kappas = design.lattice.couplerAnglesRad.map((t, k) => (k === 0 || k === stages ? Math.cos(t) ** 2 : Math.sin(t) ** 2));
       const r = place({ kind: 'mzi-lattice', id: circuitId, from: body.from, to: body.to, lengthDifferencesUnits: Array.from({ length: stages }, () => design.armDifferenceUnits), kappas, ...region });
       placed = r.ok ? { configuration: tuneLattice(r.configuration, r.circuit, design.lattice, technology.extinctionDb), circuit: r.circuit } : failure(r.reason, r.message, notes);
-      outputs = [{ from: body.from, to: body.to }];
       break;
     }
     case 'allpass-equaliser': {
@@ -152,7 +120,6 @@ export function synthesise({ spec, mesh, configuration, circuitId, impulse }: Sy
       centres = stages.map((st) => st.resonanceOffsetHz);
       const r = place({ kind: 'rings-on-bus', id: circuitId, from: body.from, to: body.to, rings: stages.map((st) => ({ perimeterUnits: design.perimeterUnits, kappa: st.powerCoupling })), ...region });
       placed = r.ok ? r : failure(r.reason, r.message, notes);
-      outputs = [{ from: body.from, to: body.to }];
       break;
     }
   }
@@ -162,15 +129,36 @@ export function synthesise({ spec, mesh, configuration, circuitId, impulse }: Sy
   let tunings: LoopTuning[] = [];
   if (centres.length > 0) ({ configuration: result, tunings } = tuneLoops(result, circuit, { offsetsHz: centres, unitDelayS, extinctionDb: technology.extinctionDb }));
   circuit = result.circuits.find((c) => c.id === circuit.id) ?? circuit;
-  const offsetsHz = verificationOffsets(design, spec.mask.regions as MaskRegion[], unitDelayS);
-  const portId = (name: string): string => mesh.ports[mesh.portIndex.get(name) ?? -1]?.id ?? name;
-  const verification = outputs.map(({ from: fromName, to: toName }, k) => {
-    const from = portId(fromName);
-    const to = portId(toName);
-    const response = simulateTransmission({ mesh, configuration: result, from, to, offsetsHz, ...(impulse ? { impulse } : {}) });
-    return { from, to, response, mask: k === 0 ? checkMask(response, spec.mask.regions as MaskRegion[]) : checkMask(response, []), figures: responseFigures(response) };
-  });
-  return { ok: true, fsrHz: realisedFsrHz(design, unitDelayS), configuration: result, circuit, design, notes, tunings, verification };
+  let checked: ReturnType<typeof verifyCircuit>;
+  try {
+    result = parkQuietly({ spec, design, mesh, configuration: result, circuit, unitDelayS }, notes);
+    if (design.kind === 'ttd-set') ({ configuration: result, circuit } = rebalanceSplitters(mesh, result, circuit));
+    checked = verifyCircuit({ spec, design, mesh, configuration: result, circuit, unitDelayS, ...(impulse ? { impulse } : {}) });
+  } catch (error) {
+    if (error instanceof SynthInputError) return failure('invalid-mask', error.message, notes);
+    throw error;
+  }
+  return { ok: true, fsrHz: realisedFsrHz(design, unitDelayS), configuration: result, circuit, design, notes, tunings, verification: checked.verification, verdict: checked.verdict, ...(checked.basePs !== undefined ? { basePs: checked.basePs } : {}) };
+}
+
+/** Once a check fails, the idle gates are re-parked until every check is within this share of its limit (some margin for the fine grid). */
+const PARKING_TARGET = 0.8;
+
+/**
+ * Leakage through finite extinction couples a circuit to the idle gates around it, and the parked loops can send that
+ * light back in phase. When a check fails on the coarse grid, idle gates near the circuit (none another circuit parked
+ * on purpose) are re-parked by a greedy search until every check is within `PARKING_TARGET` of its limit, and a note
+ * says what changed. A circuit that meets its checks keeps the chip's parking.
+ */
+function parkQuietly(input: VerifyInput, notes: RealisationNote[]): Configuration {
+  // A delay set's balance is set afterwards by its split ratios; the parking works on the delays.
+  const cost = verificationCost(input, (c) => input.design.kind === 'ttd-set' && c.quantity === 'amplitude imbalance');
+  const chip = netlistFromMesh({ mesh: input.mesh, configuration: input.configuration });
+  if (cost(chip, chip.netlist) <= 1) return input.configuration;
+  const q = quietParking({ mesh: input.mesh, configuration: input.configuration, circuit: input.circuit, cost, goodEnough: PARKING_TARGET });
+  if (q.gatesChanged > 0)
+    notes.push({ quantity: 'idle gates re-parked against leakage', requested: null, achieved: q.gatesChanged, unit: 'gates', note: `light leaked through finite extinction came back from parked cells; ${q.gatesChanged} idle gates near the circuit were parked in their other state, worst check ${q.costBefore.toFixed(2)} -> ${q.costAfter.toFixed(2)} of its limit (${q.evaluations} trial simulations)` });
+  return q.configuration;
 }
 
 /** The period of the response in frequency: 1 / (L T_u) for rings of L units, the lattice FSR, else the unit FSR. */

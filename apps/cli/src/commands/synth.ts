@@ -13,6 +13,17 @@ export const MASK_MISSED_EXIT_CODE = 3;
 
 type SynthOptions = { chip: string; into?: string; id?: string; out?: string; report?: string };
 
+/** A figure with its unit read from its name (…Hz in GHz, …Ps in ps, …Db in dB). */
+function formatFigure(name: string, value: number): string {
+  if (name.endsWith('PsPerGHz')) return `${value.toFixed(3)} ps/GHz`;
+  if (name.endsWith('Hz')) return `${(value / 1e9).toFixed(4)} GHz`;
+  if (name.endsWith('Ps')) return `${value.toFixed(2)} ps`;
+  if (name.endsWith('Db')) return `${value.toFixed(2)} dB`;
+  return value.toPrecision(6);
+}
+
+const formatCheck = (value: number, unit: string): string => (unit === 'Hz' ? `${(value / 1e9).toFixed(4)} GHz` : `${value.toFixed(3)} ${unit}`);
+
 /** A one-screen summary of what was designed, changed, and how the mask went. */
 export function synthSummary(result: SynthesisSuccess): string {
   const lines = [`placed ${result.design.kind} ${result.circuit.id}: ${result.circuit.paths.length} paths, ${result.circuit.couplers.length} couplers, FSR ${(result.fsrHz / 1e9).toFixed(3)} GHz`];
@@ -20,10 +31,10 @@ export function synthSummary(result: SynthesisSuccess): string {
   for (const t of result.tunings) lines.push(`  loop of ${t.lengthUnits} units tuned by ${t.gate}: phase ${t.phaseRad.toFixed(4)} rad`);
   for (const n of result.notes) lines.push(`  note: ${n.quantity} ${n.requested === null ? '' : `asked ${n.requested.toPrecision(6)} `}got ${n.achieved.toPrecision(6)} ${n.unit} (${n.note})`);
   for (const v of result.verification) {
-    const f = v.figures;
-    lines.push(`  ${v.from} -> ${v.to}: insertion loss ${f.insertionLossDb.toFixed(2)} dB, 3 dB band ${(f.bandwidth3dBHz / 1e9).toFixed(3)} GHz, rejection ${f.rejectionDb.toFixed(1)} dB, mean delay ${f.meanGroupDelayPs.toFixed(1)} ps`);
-    for (const c of v.mask.checks) lines.push(`    mask ${c.kind} ${c.quantity}: ${c.pass ? 'pass' : 'FAIL'} (measured ${c.measured.toFixed(3)} ${c.unit}, limit ${c.limit} ${c.unit}, margin ${c.margin.toFixed(3)} ${c.unit}, worst at ${(c.worstFrequencyHz / 1e9).toFixed(3)} GHz)`);
+    lines.push(`  ${v.fromName} -> ${v.toName} (${v.role}): ${Object.entries(v.figures).map(([name, value]) => `${name} ${formatFigure(name, value)}`).join(', ')}`);
+    for (const c of v.mask.checks) lines.push(`    ${c.kind === 'target' ? 'target' : `mask ${c.kind}`} ${c.quantity}: ${c.pass ? 'pass' : 'FAIL'} (measured ${formatCheck(c.measured, c.unit)}, limit ${formatCheck(c.limit, c.unit)}, margin ${formatCheck(c.margin, c.unit)}, worst at ${(c.worstFrequencyHz / 1e9).toFixed(3)} GHz)`);
   }
+  lines.push(result.verdict.pass ? `  verdict: pass (${result.verdict.checkCount} checks on ${result.verification.length} outputs)` : `  verdict: FAIL (${result.verdict.failed.length} of ${result.verdict.checkCount} checks: ${result.verdict.failed.map((c) => `${c.quantity} at ${c.toName}`).join('; ')})`);
   return `${lines.join('\n')}\n`;
 }
 
@@ -35,7 +46,9 @@ export function synthReport(result: SynthesisSuccess): unknown {
     design: result.design,
     notes: result.notes,
     tunings: result.tunings,
-    verification: result.verification.map((v) => ({ from: v.from, to: v.to, figures: v.figures, mask: v.mask, impulseSteps: v.response.steps, residualEnergy: v.response.residualEnergy, warning: v.response.warning })),
+    verdict: result.verdict,
+    ...(result.basePs !== undefined ? { basePs: result.basePs } : {}),
+    verification: result.verification.map((v) => ({ from: v.from, fromName: v.fromName, to: v.to, toName: v.toName, role: v.role, figures: v.figures, mask: v.mask, impulseSteps: v.response.steps, residualEnergy: v.response.residualEnergy, warning: v.response.warning })),
   };
 }
 
@@ -66,8 +79,8 @@ export function registerSynthCommand(program: Command): void {
       writeJson(result.configuration, o.out);
       if (o.report) writeJson(synthReport(result), o.report);
       process.stderr.write(synthSummary(result));
-      if (!result.verification.every((v) => v.mask.pass)) {
-        throw new CliError(`${spec.name}: the placed circuit misses its mask (configuration written)`, MASK_MISSED_EXIT_CODE);
+      if (!result.verdict.pass) {
+        throw new CliError(`${spec.name}: the placed circuit misses ${result.verdict.failed.length} of its ${result.verdict.checkCount} mask and target checks (configuration written)`, MASK_MISSED_EXIT_CODE);
       }
     });
 }

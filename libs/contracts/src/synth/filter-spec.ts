@@ -1,7 +1,7 @@
 /** The specification file format: what a designer asks for, with its mask (see docs/formats.md). */
 import { z } from 'zod';
 import { cellIdSchema } from '../mesh/mesh-definition.js';
-import { maskSchema } from './mask.js';
+import { frequencyRangeSchema, maskSchema } from './mask.js';
 
 /** Version of the specification file format. */
 export const SPEC_SCHEMA_VERSION = 1;
@@ -11,6 +11,13 @@ const positive = finite.positive();
 
 /** An external port by id (`v(q,r)n/g(q,r)e`) or by its label in the mesh definition. */
 const portIdSchema = z.string().min(1).max(64);
+
+/** The band a delay must hold over (offsets from the carrier, Hz); default -1 GHz .. +1 GHz. */
+const delayBand = {
+  bandHz: frequencyRangeSchema.optional(),
+  /** Largest peak-to-peak group-delay ripple over the band, ps (default: twice the tolerance). */
+  maxDelayRipplePs: finite.min(0).optional(),
+};
 
 const placement = {
   /** Cells the circuit must stay inside (optional). */
@@ -26,7 +33,9 @@ export const delayLineSpecSchema = z.object({
   from: portIdSchema,
   to: portIdSchema,
   delay: z.union([z.object({ ps: positive }), z.object({ units: z.number().int().positive() })]),
-  tolerancePs: finite.min(0).default(0),
+  /** Largest delay error at the carrier, ps (default: half a unit delay, the quantisation of the mesh). */
+  tolerancePs: finite.min(0).optional(),
+  ...delayBand,
   ...placement,
 });
 
@@ -38,7 +47,11 @@ export const ttdSetSpecSchema = z.object({
   stepPs: positive,
   /** Extra common delay added to every output, ps (default: as short as routing allows). */
   basePs: finite.min(0).optional(),
-  tolerancePs: finite.min(0).default(0),
+  /** Largest delay error of each output at the carrier, ps (default: half a unit delay). */
+  tolerancePs: finite.min(0).optional(),
+  /** Largest power difference between any output and the strongest one at the carrier, dB (default 1). */
+  maxImbalanceDb: finite.min(0).optional(),
+  ...delayBand,
   ...placement,
 });
 
@@ -53,6 +66,10 @@ export const ringNotchSpecSchema = z.object({
     z.object({ critical: z.literal(true) }),
   ]),
   ring: ringSize,
+  /** How far the notch depth may fall short of a depth target, dB (default 1). */
+  depthToleranceDb: finite.min(0).optional(),
+  /** How far the notch width may miss a width target, % (default 10). */
+  widthTolerancePercent: finite.min(0).optional(),
   ...placement,
 });
 
@@ -64,6 +81,8 @@ export const addDropSpecSchema = z.object({
   centreOffsetHz: finite,
   bandwidthHz: positive,
   ring: ringSize,
+  /** How far the drop band's 3 dB width may miss the request, % (default 15). */
+  widthTolerancePercent: finite.min(0).optional(),
   ...placement,
 });
 
@@ -79,6 +98,8 @@ export const coupledRingSpecSchema = z.object({
   rippleDb: positive.max(3).optional(),
   bandwidthHz: positive,
   centreOffsetHz: finite,
+  /** How far the pass band's width may miss the request, % (default 15). */
+  widthTolerancePercent: finite.min(0).optional(),
   ...placement,
 });
 
@@ -95,6 +116,10 @@ export const latticeSpecSchema = z.object({
   rejectionDb: positive.default(30),
   /** For `polynomial`: coefficients of A(z), real and imaginary parts. */
   coefficients: z.array(z.object({ re: finite, im: finite.default(0) })).max(17).optional(),
+  /** How far the stop-band rejection may fall short of `rejectionDb`, dB (default 1). */
+  rejectionToleranceDb: finite.min(0).optional(),
+  /** For `polynomial`: largest power error against |A|^2 where |A|^2 is above -20 dB, dB (default 1). */
+  shapeToleranceDb: finite.min(0).optional(),
   ...placement,
 });
 
@@ -105,6 +130,8 @@ export const transversalSpecSchema = z.object({
   /** Tap weights (field amplitudes, relative); tap k is delayed by k * tapDelayUnits. */
   taps: z.array(finite).min(2).max(16),
   tapDelayUnits: z.number().int().min(2).max(100).multipleOf(2),
+  /** Largest power error against the taps' response where it is above -20 dB, dB (default 1). */
+  shapeToleranceDb: finite.min(0).optional(),
   ...placement,
 });
 
@@ -115,6 +142,8 @@ export const allPassEqualiserSpecSchema = z.object({
   band: z.object({ fromHz: finite, toHz: finite }),
   target: z.union([z.object({ delayPs: positive }), z.object({ slopePsPerGHz: finite })]),
   stages: z.number().int().min(1).max(6),
+  /** Largest deviation of the excess delay from the target over the band, ps (default 10 % of the largest target delay, at least 1 ps). */
+  tolerancePs: finite.min(0).optional(),
   ...placement,
 });
 

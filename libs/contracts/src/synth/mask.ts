@@ -13,16 +13,23 @@ export const frequencyRangeSchema = z
  * `stop`: at least `minRejectionDb` below the pass-band peak; `delay`: group-delay ripple at most `maxDelayRipplePs`
  * (and, optionally, a mean delay within `delayTolerancePs` of `delayPs`).
  */
+const port = {
+  /** The output (port id or label) the region applies to; default: the circuit's main output(s). */
+  port: z.string().min(1).max(64).optional(),
+};
+
 export const maskRegionSchema = z.discriminatedUnion('kind', [
   z.object({
     kind: z.literal('pass'),
+    ...port,
     range: frequencyRangeSchema,
     maxInsertionLossDb: finite.min(0).optional(),
     maxRippleDb: finite.min(0).optional(),
   }),
-  z.object({ kind: z.literal('stop'), range: frequencyRangeSchema, minRejectionDb: finite.min(0) }),
+  z.object({ kind: z.literal('stop'), ...port, range: frequencyRangeSchema, minRejectionDb: finite.min(0) }),
   z.object({
     kind: z.literal('delay'),
+    ...port,
     range: frequencyRangeSchema,
     maxDelayRipplePs: finite.min(0).optional(),
     delayPs: finite.optional(),
