@@ -9,6 +9,7 @@ import { ComputeModule } from './compute/compute.module.js';
 import { ConfigurationsModule } from './configurations/configurations.module.js';
 import { DatabaseModule } from './db/database.module.js';
 import type { OpenDatabase } from './db/migrate.js';
+import { FiguresModule } from './figures/figures.module.js';
 import { HealthModule } from './health/health.module.js';
 import { InvitationsModule } from './invitations/invitations.module.js';
 import { MailModule } from './mail/mail.module.js';
@@ -41,6 +42,7 @@ export class AppModule {
         DatabaseModule.forRoot(database),
         AuthModule.forRoot(options),
         HealthModule,
+        FiguresModule,
         TeamsModule,
         MembersModule,
         InvitationsModule,

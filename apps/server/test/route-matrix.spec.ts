@@ -71,6 +71,7 @@ describe('route x role matrix', () => {
     },
     { route: 'GET /api/local-idp/user (no bearer token)', call: (a) => a.get('/api/local-idp/user'), expected: everyone(401) },
     { route: 'GET /api/me', call: (a) => a.get('/api/me'), expected: signedIn(200) },
+    { route: 'GET /api/figures', call: (a) => a.get('/api/figures'), expected: signedIn(200) },
     { route: 'GET /api/teams', call: (a) => a.get('/api/teams'), expected: signedIn(200) },
     {
       route: 'POST /api/teams',

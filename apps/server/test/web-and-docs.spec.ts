@@ -14,6 +14,7 @@ const ROUTES = [
   'get /api/auth/callback',
   'post /api/auth/logout',
   'get /api/me',
+  'get /api/figures',
   'get /api/teams',
   'post /api/teams',
   'get /api/teams/{teamId}',

@@ -27,3 +27,4 @@ export { TREE_BRANCH_ATTEMPTS } from './route-splitter-tree.js';
 export { CHAIN_ATTEMPTS } from './route-coupled-rings.js';
 export * from './make-mesh-definition.js';
 export * from './demo-technology.js';
+export * from './gates-in-use.js';

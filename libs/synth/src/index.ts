@@ -74,3 +74,5 @@ export { drawPerturbations, gateSensitivities, MONTE_CARLO_IMPULSE, yieldTrial }
 export type { GateSensitivity, ToleranceModel, YieldStudy } from './yield-trial.js';
 export { runYieldChunk } from './yield-chunk.js';
 export type { YieldChunkTask } from './yield-chunk.js';
+export { savedFigures, verifySpec } from './verify-spec.js';
+export type { SpecCheck } from './verify-spec.js';

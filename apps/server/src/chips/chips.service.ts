@@ -1,12 +1,12 @@
 /** Chips: create from a template or a chip JSON, edit, read; every chip belongs to one team. */
 import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { Chip, CreateChip, MeshDefinitionFile, UpdateChip, User } from '@hexloom/contracts';
-import { buildMesh, makeMeshDefinition, MESH_SCHEMA_VERSION, type Mesh } from '@hexloom/mesh';
-import { and, asc, eq, sql } from 'drizzle-orm';
+import { buildMesh, deadGatesInUse, makeMeshDefinition, MESH_SCHEMA_VERSION, type Mesh } from '@hexloom/mesh';
+import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import { AuditService } from '../audit/audit.service.js';
 import { DATABASE, type Database } from '../db/database.js';
 import { loginMap } from '../db/login-map.js';
-import { calibrations, chips, type ChipRow } from '../db/schema/index.js';
+import { calibrations, chips, type ChipRow, configurations, configurationVersions } from '../db/schema/index.js';
 import { InvalidChipError } from './chip-errors.js';
 
 /** Builds the mesh of a definition or throws a 422 naming why it cannot be built. */
@@ -98,7 +98,23 @@ export class ChipsService {
     const calibrated = new Set(
       rows.length === 0 ? [] : (await this.db.selectDistinct({ chipId: calibrations.chipId }).from(calibrations)).map((r) => r.chipId),
     );
+    const chipIds = rows.map((r) => r.id);
+    const versions =
+      chipIds.length === 0
+        ? []
+        : await this.db
+            .select({ chipId: configurations.chipId, configurationId: configurations.id, name: configurations.name, number: configurationVersions.number, status: configurationVersions.status, content: configurationVersions.content })
+            .from(configurationVersions)
+            .innerJoin(configurations, eq(configurations.id, configurationVersions.configurationId))
+            .where(inArray(configurations.chipId, chipIds));
+    const affected = (r: ChipRow) =>
+      versions
+        .filter((v) => v.chipId === r.id)
+        .map((v) => ({ configurationId: v.configurationId, configurationName: v.name, number: v.number, status: v.status, deadGates: deadGatesInUse(v.content, r.definition.deadGates) }))
+        .filter((v) => v.deadGates.length > 0)
+        .sort((a, b) => a.configurationName.localeCompare(b.configurationName) || a.number - b.number);
     return rows.map((r) => ({
+      affectedVersions: affected(r),
       id: r.id,
       name: r.name,
       definition: r.definition,

@@ -71,7 +71,7 @@ export class ComputeController {
   @ApiOkResponse({ schema: openApiSchema(proposalSchema) })
   async synthesise(@Param(new ZodValidationPipe(versionParams)) p: VersionParams, @Body(new ZodValidationPipe(synthesiseBodySchema)) body: SynthesiseBody): Promise<Proposal> {
     const ref = await this.configurations.findVersionOrFail(p.teamId, p.configurationId, p.number);
-    return this.edits.synthesise(ref.version, body);
+    return this.edits.synthesise(ref.version, ref.chip, body);
   }
 
   @Post('circuits')
@@ -82,7 +82,7 @@ export class ComputeController {
   @ApiOkResponse({ schema: openApiSchema(proposalSchema) })
   async place(@Param(new ZodValidationPipe(versionParams)) p: VersionParams, @Body(new ZodValidationPipe(placeCircuitBodySchema)) body: PlaceCircuitBody): Promise<Proposal> {
     const ref = await this.configurations.findVersionOrFail(p.teamId, p.configurationId, p.number);
-    return this.edits.place(ref.version, body.request);
+    return this.edits.place(ref.version, ref.chip, body.request);
   }
 
   @Post('circuits/:circuitId/remove')
@@ -94,7 +94,7 @@ export class ComputeController {
   @ApiUnprocessableEntityResponse({ description: 'No such circuit' })
   async remove(@Param(new ZodValidationPipe(circuitParams)) p: z.output<typeof circuitParams>): Promise<Proposal> {
     const ref = await this.configurations.findVersionOrFail(p.teamId, p.configurationId, p.number);
-    return this.edits.remove(ref.version, p.circuitId);
+    return this.edits.remove(ref.version, ref.chip, p.circuitId);
   }
 
   @Post('circuits/:circuitId/reroute')
@@ -106,7 +106,7 @@ export class ComputeController {
   @ApiOkResponse({ schema: openApiSchema(proposalSchema) })
   async reroute(@Param(new ZodValidationPipe(circuitParams)) p: z.output<typeof circuitParams>, @Body(new ZodValidationPipe(rerouteCircuitBodySchema)) body: RerouteCircuitBody): Promise<Proposal> {
     const ref = await this.configurations.findVersionOrFail(p.teamId, p.configurationId, p.number);
-    return this.edits.reroute(ref.version, p.circuitId, body.request);
+    return this.edits.reroute(ref.version, ref.chip, p.circuitId, body.request);
   }
 
   @Post('yield-jobs')

@@ -1,86 +1,100 @@
 /** Edits proposed on a version: synthesise a spec, place, remove or re-route a circuit (nothing is saved here). */
 import { Injectable } from '@nestjs/common';
-import type { CircuitFigures, CircuitSpec, ConfigurationFile, Proposal, RouteRequestFile, SynthesiseBody } from '@hexloom/contracts';
-import { placeCircuit, removeCircuit, type RouteRequest } from '@hexloom/mesh';
-import { type ResponseFigures, synthesise } from '@hexloom/synth';
+import type { CircuitSpec, ConfigurationFile, OutputVerification, Proposal, RouteRequestFile, SynthesiseBody } from '@hexloom/contracts';
+import { placeCircuit, removeCircuit, type Configuration, type Mesh, type RouteRequest } from '@hexloom/mesh';
+import { savedFigures, synthesise, type Verification } from '@hexloom/synth';
 import { buildChipMesh } from '../chips/chips.service.js';
-import type { ConfigurationVersionRow } from '../db/schema/index.js';
+import { recomputeFigures } from '../configurations/recompute-figures.js';
+import type { ChipRow, ConfigurationVersionRow } from '../db/schema/index.js';
 import { NothingToRerouteError } from './compute-errors.js';
 
-/** The figures saved with a version: the quoted response figures and the worst mask margin, finite values only. */
-function quotedFigures(f: ResponseFigures, worstMarginDb: number | null): Record<string, number> {
-  const all: Record<string, number | null> = {
-    insertionLossDb: f.insertionLossDb,
-    peakFrequencyHz: f.peakFrequencyHz,
-    bandwidth3dBHz: f.bandwidth3dBHz,
-    band3dBLowHz: f.band3dBHz[0],
-    band3dBHighHz: f.band3dBHz[1],
-    rejectionDb: f.rejectionDb,
-    delayRippleIn3dBBandPs: f.delayRippleIn3dBBandPs,
-    worstMarginDb,
+/** A verified output in the API shape: ports by id and name, its checks and its figures (finite values only). */
+export function outputVerification(v: Verification): OutputVerification {
+  return {
+    from: v.from, fromName: v.fromName, to: v.to, toName: v.toName, role: v.role, pass: v.mask.pass,
+    checks: v.mask.checks,
+    figures: Object.fromEntries(Object.entries(v.figures).filter((e) => Number.isFinite(e[1]))),
   };
-  return Object.fromEntries(Object.entries(all).filter((e): e is [string, number] => typeof e[1] === 'number' && Number.isFinite(e[1])));
 }
 
-const withoutCircuit = <T>(record: Record<string, T>, id: string): Record<string, T> => Object.fromEntries(Object.entries(record).filter(([k]) => k !== id));
+/**
+ * The version's content on the chip as it is now: edits route on the chip's current definition (its dead gates,
+ * technology and wiring), not on the copy saved with the version, so a gate marked dead since is avoided.
+ */
+function onCurrentChip(version: ConfigurationVersionRow, chip: ChipRow): ConfigurationFile {
+  return { ...version.content, mesh: chip.definition };
+}
 
 /** Builds proposals from library calls; the client saves one with POST .../versions and its base version. */
 @Injectable()
 export class EditService {
-  /** Synthesises `body.spec` onto what the version leaves free; the figures of each verified output are proposed for saving. */
-  synthesise(version: ConfigurationVersionRow, body: SynthesiseBody): Proposal {
-    return this.synthesiseOn(version, version.content, body, version.specs, version.figures);
+  /** Synthesises `body.spec` onto what the version leaves free; every circuit with a spec is verified again on the result. */
+  synthesise(version: ConfigurationVersionRow, chip: ChipRow, body: SynthesiseBody): Proposal {
+    return this.synthesiseOn(version, onCurrentChip(version, chip), body, version.specs);
   }
 
   /** Places a circuit from a route request. */
-  place(version: ConfigurationVersionRow, request: RouteRequestFile): Proposal {
-    const placed = placeCircuit(version.content, request as RouteRequest, buildChipMesh(version.content.mesh));
+  place(version: ConfigurationVersionRow, chip: ChipRow, request: RouteRequestFile): Proposal {
+    const content = onCurrentChip(version, chip);
+    const placed = placeCircuit(content as Configuration, request as RouteRequest, buildChipMesh(content.mesh));
     if (!placed.ok) return { ok: false, reason: placed.reason, message: placed.message, notes: [] };
-    return this.success(version, placed.configuration as ConfigurationFile, placed.circuit as ConfigurationFile['circuits'][number], version.specs, version.figures);
+    return this.success(version, placed.configuration as ConfigurationFile, placed.circuit as ConfigurationFile['circuits'][number], version.specs);
   }
 
   /** Removes a circuit; its gates return to the parked state (MeshError, a 422, for an unknown circuit). */
-  remove(version: ConfigurationVersionRow, circuitId: string): Proposal {
-    const content = removeCircuit(version.content, circuitId) as ConfigurationFile;
-    return this.success(version, content, null, version.specs.filter((s) => s.circuitId !== circuitId), withoutCircuit(version.figures, circuitId));
+  remove(version: ConfigurationVersionRow, chip: ChipRow, circuitId: string): Proposal {
+    const content = removeCircuit(onCurrentChip(version, chip) as Configuration, circuitId) as ConfigurationFile;
+    return this.success(version, content, null, version.specs.filter((s) => s.circuitId !== circuitId));
   }
 
   /** Removes then places the circuit again: from the given request, or by re-synthesising its saved spec. */
-  reroute(version: ConfigurationVersionRow, circuitId: string, request: RouteRequestFile | undefined): Proposal {
+  reroute(version: ConfigurationVersionRow, chip: ChipRow, circuitId: string, request: RouteRequestFile | undefined): Proposal {
     if (request && request.id !== circuitId) throw new NothingToRerouteError(circuitId, `the request's id is "${request.id}"`);
-    const freed = removeCircuit(version.content, circuitId) as ConfigurationFile;
+    const freed = removeCircuit(onCurrentChip(version, chip) as Configuration, circuitId) as ConfigurationFile;
     const specs = version.specs.filter((s) => s.circuitId !== circuitId);
-    const figures = withoutCircuit(version.figures, circuitId);
     if (request) {
-      const placed = placeCircuit(freed, request as RouteRequest, buildChipMesh(freed.mesh));
+      const placed = placeCircuit(freed as Configuration, request as RouteRequest, buildChipMesh(freed.mesh));
       if (!placed.ok) return { ok: false, reason: placed.reason, message: placed.message, notes: [] };
-      return this.success(version, placed.configuration as ConfigurationFile, placed.circuit as ConfigurationFile['circuits'][number], specs, figures);
+      return this.success(version, placed.configuration as ConfigurationFile, placed.circuit as ConfigurationFile['circuits'][number], specs);
     }
     const saved = version.specs.find((s) => s.circuitId === circuitId);
     if (!saved) throw new NothingToRerouteError(circuitId, 'it has no saved spec; send a route request');
-    return this.synthesiseOn(version, freed, { circuitId, spec: saved.spec }, specs, figures);
+    return this.synthesiseOn(version, freed, { circuitId, spec: saved.spec }, specs);
   }
 
-  private synthesiseOn(version: ConfigurationVersionRow, content: ConfigurationFile, body: SynthesiseBody, specs: CircuitSpec[], figures: CircuitFigures): Proposal {
-    const result = synthesise({ spec: body.spec, mesh: buildChipMesh(content.mesh), configuration: content, circuitId: body.circuitId });
+  private synthesiseOn(version: ConfigurationVersionRow, content: ConfigurationFile, body: SynthesiseBody, specs: CircuitSpec[]): Proposal {
+    const mesh = buildChipMesh(content.mesh);
+    const result = synthesise({ spec: body.spec, mesh, configuration: content as Configuration, circuitId: body.circuitId });
     if (!result.ok) return { ok: false, reason: result.reason, message: result.message, notes: result.notes };
-    const verification = result.verification.map((v) => ({ from: v.from, to: v.to, pass: v.mask.pass, figures: quotedFigures(v.figures, v.mask.worst?.margin ?? null) }));
-    const first = verification[0];
-    const newFigures = first ? { ...figures, [body.circuitId]: first.figures } : figures;
+    const allSpecs = [...specs.filter((s) => s.circuitId !== body.circuitId), { circuitId: body.circuitId, spec: body.spec }];
+    const proposed = result.configuration as ConfigurationFile;
+    // The new circuit was just verified; the others are verified again (its leakage and parking reach them a little).
+    const rest = this.verifyAll(mesh, proposed, specs.filter((s) => s.circuitId !== body.circuitId), null);
+    const figures = { ...rest.figures, [body.circuitId]: savedFigures(result.verification, result.verdict) };
+    const others = rest.others;
     return {
       ok: true,
       basedOnVersion: version.number,
-      content: result.configuration as ConfigurationFile,
+      content: proposed,
       circuit: result.circuit as ConfigurationFile['circuits'][number],
       notes: result.notes,
       design: result.design,
-      verification,
-      figures: newFigures,
-      specs: [...specs.filter((s) => s.circuitId !== body.circuitId), { circuitId: body.circuitId, spec: body.spec }],
+      verification: result.verification.map(outputVerification),
+      verdict: { pass: result.verdict.pass, checks: result.verdict.checkCount, failed: result.verdict.failed.length },
+      others,
+      figures,
+      specs: allSpecs,
     };
   }
 
-  private success(version: ConfigurationVersionRow, content: ConfigurationFile, circuit: ConfigurationFile['circuits'][number] | null, specs: CircuitSpec[], figures: CircuitFigures): Proposal {
-    return { ok: true, basedOnVersion: version.number, content, circuit, notes: [], design: null, verification: [], figures, specs };
+  private success(version: ConfigurationVersionRow, content: ConfigurationFile, circuit: ConfigurationFile['circuits'][number] | null, specs: CircuitSpec[]): Proposal {
+    const { figures, others } = this.verifyAll(buildChipMesh(content.mesh), content, specs, null);
+    return { ok: true, basedOnVersion: version.number, content, circuit, notes: [], design: null, verification: [], verdict: null, others, figures, specs };
+  }
+
+  /** Figures of every circuit with a spec on the proposed content, and the verdicts of all but `except`. */
+  private verifyAll(mesh: Mesh, content: ConfigurationFile, specs: readonly CircuitSpec[], except: string | null) {
+    const { figures, verdicts } = recomputeFigures(mesh, content, specs);
+    return { figures, others: verdicts.filter((v) => v.circuitId !== except).map((v) => ({ circuitId: v.circuitId, pass: v.pass, failed: v.failed })) };
   }
 }

@@ -1,10 +1,10 @@
 /** Configurations of a chip and their immutable versions: create, save with optimistic concurrency, duplicate, diff. */
 import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type {
-  ConfigurationDetail, ConfigurationFile, ConfigurationSummary, ConfigurationVersion, CreateConfiguration, DuplicateConfiguration, SaveVersion, User, VersionDiff, VersionSummary,
+  CircuitFigures, CircuitSpec, ConfigurationDetail, ConfigurationFile, ConfigurationSummary, ConfigurationVersion, CreateConfiguration, DuplicateConfiguration, SaveVersion, User, VersionDiff, VersionSummary,
 } from '@hexloom/contracts';
-import { checkConfiguration, emptyConfiguration } from '@hexloom/mesh';
-import { and, asc, desc, eq, sql } from 'drizzle-orm';
+import { checkConfiguration, deadGatesInUse, emptyConfiguration } from '@hexloom/mesh';
+import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
 import { AuditService } from '../audit/audit.service.js';
 import { buildChipMesh, ChipsService } from '../chips/chips.service.js';
 import { DATABASE, type Database, type DbExecutor } from '../db/database.js';
@@ -12,6 +12,7 @@ import { loginMap } from '../db/login-map.js';
 import { type ChipRow, chips, configurations, type ConfigurationRow, configurationVersions, type ConfigurationVersionRow } from '../db/schema/index.js';
 import { InvalidContentError, StaleVersionError } from './configuration-errors.js';
 import { diffVersions } from './diff-versions.js';
+import { recomputeFigures } from './recompute-figures.js';
 
 /** A version with the configuration and chip it belongs to. */
 export type VersionRef = { chip: ChipRow; configuration: ConfigurationRow; version: ConfigurationVersionRow };
@@ -71,11 +72,11 @@ export class ConfigurationsService {
   async create(actor: User, teamId: string, chipId: string, body: CreateConfiguration): Promise<ConfigurationDetail> {
     const chip = await this.chips.findRowOrFail(teamId, chipId);
     const content = body.content ?? (emptyConfiguration(chip.definition, 'bar') as ConfigurationFile);
-    this.checkContent(content, chip);
+    const figures = this.checkContent(content, chip, body.specs);
     const id = await this.db.transaction(async (tx) => {
       const [row] = await tx.insert(configurations).values({ teamId, chipId, name: body.name, createdBy: actor.id }).returning();
       if (!row) throw new Error(`ConfigurationsService.create: insert of "${body.name}" returned no row`);
-      await tx.insert(configurationVersions).values({ configurationId: row.id, number: 1, content, specs: body.specs, figures: body.figures, note: body.note, authorId: actor.id });
+      await tx.insert(configurationVersions).values({ configurationId: row.id, number: 1, content, specs: body.specs, figures, note: body.note, authorId: actor.id });
       await this.audit.record({ action: 'configuration.created', teamId, actorId: actor.id, target: body.name, detail: { configurationId: row.id, chipId } }, tx);
       return row.id;
     });
@@ -88,7 +89,7 @@ export class ConfigurationsService {
    */
   async save(actor: User, teamId: string, configurationId: string, body: SaveVersion): Promise<ConfigurationVersion> {
     const configuration = await this.findRowOrFail(teamId, configurationId);
-    this.checkContent(body.content, await this.chips.findRowOrFail(teamId, configuration.chipId));
+    const figures = this.checkContent(body.content, await this.chips.findRowOrFail(teamId, configuration.chipId), body.specs);
     const saved = await this.db.transaction(async (tx) => {
       const [bumped] = await tx
         .update(configurations)
@@ -98,7 +99,7 @@ export class ConfigurationsService {
       if (!bumped) return null;
       const [row] = await tx
         .insert(configurationVersions)
-        .values({ configurationId, number: body.baseVersion + 1, content: body.content, specs: body.specs, figures: body.figures, note: body.note, authorId: actor.id })
+        .values({ configurationId, number: body.baseVersion + 1, content: body.content, specs: body.specs, figures, note: body.note, authorId: actor.id })
         .returning();
       if (!row) throw new Error(`ConfigurationsService.save: insert of version ${body.baseVersion + 1} returned no row`);
       await this.audit.record({ action: 'version.saved', teamId, actorId: actor.id, target: configuration.name, detail: { configurationId, version: row.number } }, tx);
@@ -137,9 +138,12 @@ export class ConfigurationsService {
     return diffVersions(a.version, b.version);
   }
 
-  /** Version rows in the API shape (logins resolved). */
+  /** Version rows in the API shape (logins resolved; dead gates in use read from each configuration's chip as it is now). */
   async toVersions(rows: ConfigurationVersionRow[]): Promise<ConfigurationVersion[]> {
     const logins = await loginMap(this.db, rows.flatMap((r) => [r.authorId, r.approvedBy]));
+    const ids = [...new Set(rows.map((r) => r.configurationId))];
+    const owners = ids.length === 0 ? [] : await this.db.select({ id: configurations.id, dead: chips.definition }).from(configurations).innerJoin(chips, eq(chips.id, configurations.chipId)).where(inArray(configurations.id, ids));
+    const deadOf = new Map(owners.map((o) => [o.id, o.dead.deadGates]));
     return rows.map((r) => ({
       id: r.id,
       configurationId: r.configurationId,
@@ -153,11 +157,15 @@ export class ConfigurationsService {
       figures: r.figures,
       approvedBy: r.approvedBy ? (logins.get(r.approvedBy) ?? null) : null,
       approvedAt: r.approvedAt?.toISOString() ?? null,
+      deadGatesInUse: deadGatesInUse(r.content, deadOf.get(r.configurationId) ?? []),
     }));
   }
 
-  /** 422 when the content is for a chip of another shape, its mesh cannot be built, or it breaks the mesh rules. */
-  private checkContent(content: ConfigurationFile, chip: ChipRow): void {
+  /**
+   * 422 when the content is for a chip of another shape, its mesh cannot be built, it breaks the mesh rules, or a spec
+   * names a circuit it does not have; otherwise the figures to save, recomputed from the content and its specs.
+   */
+  private checkContent(content: ConfigurationFile, chip: ChipRow, specs: readonly CircuitSpec[]): CircuitFigures {
     if (JSON.stringify(content.mesh.shape) !== JSON.stringify(chip.definition.shape)) {
       throw new InvalidContentError(`The content is for a mesh of shape ${JSON.stringify(content.mesh.shape)}, but chip "${chip.name}" has ${JSON.stringify(chip.definition.shape)}`, [
         { path: 'content.mesh.shape', message: 'not the chip\'s shape' },
@@ -171,6 +179,11 @@ export class ConfigurationsService {
         check.violations.map((v) => ({ path: v.code, message: v.message })),
       );
     }
+    const ids = new Set(content.circuits.map((c) => c.id));
+    const orphans = specs.filter((s) => !ids.has(s.circuitId));
+    if (orphans.length > 0)
+      throw new InvalidContentError(`A spec names circuit ${orphans.map((s) => `"${s.circuitId}"`).join(', ')}, which the content does not have`, orphans.map((s) => ({ path: 'specs', message: `no circuit ${s.circuitId}` })));
+    return recomputeFigures(mesh, content, specs).figures;
   }
 
   private async summaries(rows: ConfigurationRow[]): Promise<ConfigurationSummary[]> {

@@ -37,3 +37,17 @@ describe('diffVersions', () => {
     expect(diffVersions(same, same)).toEqual({ from: 3, to: 3, gatesChanged: [], circuitsAdded: [], circuitsRemoved: [], circuitsChanged: [], parkedStateChanged: false, figureChanges: [] });
   });
 });
+
+describe('diffVersions of a circuit that did not change but whose shared gate did', () => {
+  const ring: ConfigurationFile['circuits'][number] = { id: 'ring', kind: 'path', ports: [], paths: [{ role: 'bus', from: { gate: 'g(0,0)e', at: 'a0' }, to: { gate: 'g(0,0)e', at: 'a1' }, steps: [{ gate: 'g(0,0)ne', in: 'a0', out: 'a1' }] }], couplers: [] };
+  const sut = diffVersions(
+    side(1, { gates: [{ gate: 'g(0,0)ne', state: 'bar', phaseRad: 1.2, circuit: 'ring' }], circuits: [ring] }),
+    side(2, { gates: [{ gate: 'g(0,0)ne', state: 'bar', circuit: 'delay' }], circuits: [ring, circuit('delay', 'g(0,0)ne')] }),
+  );
+
+  it('lists that circuit as changed: its light sees another setting', () => {
+    expect(sut.circuitsAdded).toEqual(['delay']);
+    expect(sut.circuitsChanged).toEqual(['ring']);
+    expect(sut.gatesChanged.map((g) => g.gate)).toEqual(['g(0,0)ne']);
+  });
+});

@@ -46,7 +46,13 @@ export const DEMO_SPECS: readonly { configuration: string; circuitId: string; sp
   {
     configuration: 'Beam-steering delay set',
     circuitId: 'ttd',
-    spec: { schemaVersion: 1, name: '4-element true-time-delay set, 37.5 ps steps (demo)', spec: { kind: 'ttd-set', from: 'W20', outputs: ['E09', 'E15', 'E21', 'E27'], stepPs: 37.5, tolerancePs: 5 }, mask: { regions: [] } },
+    spec: {
+      schemaVersion: 1,
+      name: '4-element true-time-delay set, 37.5 ps steps (demo)',
+      // Outputs of one parity from W20 (every path there is even), so whole-unit steps can follow 37.5 ps.
+      spec: { kind: 'ttd-set', from: 'W20', outputs: ['E09', 'E13', 'E21', 'E25'], stepPs: 37.5, tolerancePs: 5, bandHz: { fromHz: -1e9, toHz: 1e9 }, maxDelayRipplePs: 10, maxImbalanceDb: 1 },
+      mask: { regions: [] },
+    },
   },
   {
     configuration: 'Interferer notch',

@@ -1,7 +1,7 @@
 /** Seeds the invented demo designs into the demo team: chip, calibration, three configurations in review states. */
 import type { CircuitFigures, ConfigurationFile, VersionStatus } from '@hexloom/contracts';
 import { buildMesh, emptyConfiguration } from '@hexloom/mesh';
-import { randomStream, simulateTransmission, synthesise } from '@hexloom/synth';
+import { randomStream, savedFigures, simulateTransmission, synthesise } from '@hexloom/synth';
 import { and, eq, inArray } from 'drizzle-orm';
 import type { Database, DbExecutor } from './database.js';
 import { DEMO_TEAM } from './demo-accounts.js';
@@ -19,9 +19,6 @@ const PLANS: readonly Plan[] = [
   { author: 'tobin', status: 'in_review', reviewer: 'wen' },
   { author: 'noor', status: 'changes_requested', reviewer: 'caspar' },
 ];
-
-const figuresOf = (record: Record<string, unknown>): Record<string, number> =>
-  Object.fromEntries(Object.entries(record).filter((e): e is [string, number] => typeof e[1] === 'number' && Number.isFinite(e[1])));
 
 /**
  * Inserts the demo chip of the demo team with its calibration, the three synthesised configurations
@@ -46,8 +43,9 @@ export async function seedDemoDesigns(db: Database): Promise<DesignSeedResult> {
   const designs = DEMO_SPECS.map((d) => {
     const result = synthesise({ spec: d.spec, mesh, configuration: empty, circuitId: d.circuitId });
     if (!result.ok) throw new Error(`seedDemoDesigns: "${d.spec.name}" could not be synthesised: ${result.message}`);
-    const first = result.verification[0];
-    const figures: CircuitFigures = first ? { [d.circuitId]: { ...figuresOf(first.figures), worstMarginDb: first.mask.worst?.margin ?? 0 } } : {};
+    // A demo that misses its own spec would teach the wrong thing: refuse to seed it.
+    if (!result.verdict.pass) throw new Error(`seedDemoDesigns: "${d.spec.name}" misses ${result.verdict.failed.length} of its checks: ${result.verdict.failed.map((c) => `${c.quantity} at ${c.toName} (${c.measured.toPrecision(4)} ${c.unit}, limit ${c.limit.toPrecision(4)})`).join('; ')}`);
+    const figures: CircuitFigures = { [d.circuitId]: savedFigures(result.verification, result.verdict) };
     return { ...d, content: result.configuration as ConfigurationFile, figures };
   });
   return db.transaction(async (tx) => {

@@ -25,11 +25,11 @@ const definition: Chip['definition'] = {
   deadGates: [],
 };
 
-export const demoChip: Chip = { id: DEMO_CHIP_ID, name: 'Demo mesh (invented)', definition, revision: 1, createdBy: 'noor', createdAt: '2026-11-30T09:00:00.000Z', updatedAt: '2026-11-30T09:00:00.000Z', hasCalibration: true };
+export const demoChip: Chip = { id: DEMO_CHIP_ID, name: 'Demo mesh (invented)', definition, revision: 1, createdBy: 'noor', createdAt: '2026-11-30T09:00:00.000Z', updatedAt: '2026-11-30T09:00:00.000Z', hasCalibration: true, affectedVersions: [] };
 
 export const demoSummary: ConfigurationSummary = { id: DEMO_CONFIGURATION_ID, chipId: DEMO_CHIP_ID, name: 'Interferer notch', headVersion: 2, headStatus: 'in_review', createdBy: 'tobin', createdAt: '2026-11-30T09:00:00.000Z', updatedAt: '2026-11-30T10:00:00.000Z' };
 
-const versionBase = { configurationId: DEMO_CONFIGURATION_ID, author: 'tobin', note: '', createdAt: '2026-11-30T10:00:00.000Z', approvedBy: null, approvedAt: null };
+const versionBase = { configurationId: DEMO_CONFIGURATION_ID, author: 'tobin', note: '', createdAt: '2026-11-30T10:00:00.000Z', approvedBy: null, approvedAt: null, deadGatesInUse: [] };
 
 export const demoDetail: ConfigurationDetail = {
   ...demoSummary,

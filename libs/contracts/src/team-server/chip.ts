@@ -13,6 +13,8 @@ export const chipSchema = z.object({
   createdAt: z.string(),
   updatedAt: z.string(),
   hasCalibration: z.boolean(),
+  /** Versions of this chip's configurations whose circuits use a gate the chip now marks dead (re-route them). */
+  affectedVersions: z.array(z.object({ configurationId: z.uuid(), configurationName: z.string(), number: z.number().int().positive(), status: z.string(), deadGates: z.array(gateIdSchema) })),
 });
 export type Chip = z.infer<typeof chipSchema>;
 

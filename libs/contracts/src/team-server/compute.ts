@@ -13,6 +13,32 @@ const portRef = z.string().min(1).max(80);
 /** What the synthesiser had to change to fit whole unit lengths. */
 export const realisationNoteSchema = z.object({ quantity: z.string(), requested: z.number().nullable(), achieved: z.number(), unit: z.string(), note: z.string() });
 
+export const maskCheckItemSchema = z.object({
+  /** A mask region's kind, or `target` for a check derived from the specification's own targets. */
+  kind: z.enum(['pass', 'stop', 'delay', 'target']),
+  quantity: z.string(),
+  limit: z.number(),
+  measured: z.number(),
+  direction: z.enum(['at-most', 'at-least']),
+  margin: z.number(),
+  pass: z.boolean(),
+  worstFrequencyHz: z.number(),
+  unit: z.enum(['dB', 'ps', 'Hz', '%', 'ps/GHz']),
+});
+
+/** One verified output of a synthesised circuit: ports by id and by the chip's name, checks and figures. */
+export const outputVerificationSchema = z.object({
+  from: z.string(),
+  fromName: z.string(),
+  to: z.string(),
+  toName: z.string(),
+  role: z.enum(['main', 'through']),
+  pass: z.boolean(),
+  checks: z.array(maskCheckItemSchema),
+  figures: z.record(z.string(), z.number()),
+});
+export type OutputVerification = z.infer<typeof outputVerificationSchema>;
+
 /** A proposed new content (not saved: save it with POST .../versions and the version it was based on). */
 export const proposalSchema = z.discriminatedUnion('ok', [
   z.object({
@@ -23,7 +49,11 @@ export const proposalSchema = z.discriminatedUnion('ok', [
     notes: z.array(realisationNoteSchema),
     /** Synthesis only: the design numbers, and per output the mask report and figures of the whole-chip simulation. */
     design: z.record(z.string(), z.unknown()).nullable(),
-    verification: z.array(z.object({ from: z.string(), to: z.string(), pass: z.boolean(), figures: z.record(z.string(), z.number()) })),
+    verification: z.array(outputVerificationSchema),
+    /** Synthesis only: passes when every check of every output does. */
+    verdict: z.object({ pass: z.boolean(), checks: z.number().int(), failed: z.number().int() }).nullable(),
+    /** The other circuits whose specs were verified again on the proposed content (leakage couples them a little). */
+    others: z.array(z.object({ circuitId: z.string(), pass: z.boolean(), failed: z.array(z.string()) })).default([]),
     /** Figures and specs to save with the version (the base version's, updated for this change). */
     figures: z.record(z.string(), z.record(z.string(), z.number())),
     specs: z.array(circuitSpecSchema),
@@ -51,17 +81,6 @@ export type SimulateBody = z.infer<typeof simulateBodySchema>;
 /** POST .../mask-check body. */
 export const maskCheckBodySchema = z.object({ from: portRef, to: portRef, grid: frequencyGridSchema, mask: maskSchema });
 export type MaskCheckBody = z.infer<typeof maskCheckBodySchema>;
-
-export const maskCheckItemSchema = z.object({
-  kind: z.enum(['pass', 'stop', 'delay']),
-  quantity: z.string(),
-  limit: z.number(),
-  measured: z.number(),
-  margin: z.number(),
-  pass: z.boolean(),
-  worstFrequencyHz: z.number(),
-  unit: z.enum(['dB', 'ps']),
-});
 
 /** POST .../mask-check answer. */
 export const maskCheckAnswerSchema = z.object({

@@ -30,6 +30,8 @@ export const configurationVersionSchema = z.object({
   figures: circuitFiguresSchema,
   approvedBy: z.string().nullable(),
   approvedAt: z.string().nullable(),
+  /** Gates this version's circuits use that the chip now marks dead: re-route before it goes to the bench. */
+  deadGatesInUse: z.array(z.string()),
 });
 export type ConfigurationVersion = z.infer<typeof configurationVersionSchema>;
 
@@ -56,22 +58,26 @@ export type ConfigurationDetail = z.infer<typeof configurationDetailSchema>;
 
 const nameSchema = z.string().trim().min(1).max(120);
 
-/** POST /chips/:chipId/configurations body; without `content` the first version has every gate parked. */
+/**
+ * POST /chips/:chipId/configurations body; without `content` the first version has every gate parked. The figures
+ * saved with it are computed by the server from the content and the specs.
+ */
 export const createConfigurationSchema = z.object({
   name: nameSchema,
   content: configurationSchema.optional(),
   specs: z.array(circuitSpecSchema).default([]),
-  figures: circuitFiguresSchema.default({}),
   note: z.string().max(2000).default(''),
 });
 export type CreateConfiguration = z.infer<typeof createConfigurationSchema>;
 
-/** POST /configurations/:configurationId/versions body: a save based on `baseVersion`. */
+/**
+ * POST /configurations/:configurationId/versions body: a save based on `baseVersion`. The figures saved with the
+ * version are recomputed by the server for every circuit with a spec (a figure sent by the client is not taken).
+ */
 export const saveVersionSchema = z.object({
   baseVersion: z.number().int().positive(),
   content: configurationSchema,
   specs: z.array(circuitSpecSchema).default([]),
-  figures: circuitFiguresSchema.default({}),
   note: z.string().max(2000).default(''),
 });
 export type SaveVersion = z.infer<typeof saveVersionSchema>;
