@@ -13,6 +13,9 @@ export type SpectrumFileData = {
   kind: 'hexloom-spectrum';
   from: string;
   to: string;
+  /** The chip's names of the two ports (their labels, else their ids). */
+  fromName: string;
+  toName: string;
   referenceFrequencyHz: number;
   unitDelayS: number;
   method: Spectrum['method'];
@@ -32,8 +35,11 @@ export type SpectrumFileData = {
 
 const finiteOrNull = (x: number): number | null => (Number.isFinite(x) ? x : null);
 
-/** The spectrum file of a simulated connection: absolute and offset frequencies, dB, degrees, ps, ps/nm, re/im. */
-export function toSpectrumFile(result: ConnectionResult): SpectrumFileData {
+/**
+ * The spectrum file of a simulated connection: absolute and offset frequencies, dB, degrees, ps, ps/nm, re/im.
+ * `names` are the chip's names of the ports (labels); without them the ids stand in.
+ */
+export function toSpectrumFile(result: ConnectionResult, names?: { from: string; to: string }): SpectrumFileData {
   const s = result.spectrum;
   const db = amplitudeDb(s);
   const ph = phaseRad(s);
@@ -42,6 +48,8 @@ export function toSpectrumFile(result: ConnectionResult): SpectrumFileData {
     kind: 'hexloom-spectrum',
     from: result.from,
     to: result.to,
+    fromName: names?.from ?? result.from,
+    toName: names?.to ?? result.to,
     referenceFrequencyHz: s.referenceFrequencyHz,
     unitDelayS: s.unitDelayS,
     method: s.method,

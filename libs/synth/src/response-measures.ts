@@ -27,7 +27,10 @@ export function indicesWithin(r: SampledResponse, fromHz: number, toHz: number):
   return out;
 }
 
-/** Smallest, largest and mean of `values` over the samples in [fromHz, toHz] (NaN when none). */
+/**
+ * Smallest, largest and mean of `values` over the samples in [fromHz, toHz] (NaN when none). The mean is the
+ * trapezoidal average over frequency, so a grid refined near the edges does not weigh them more (common practice).
+ */
 export function statsWithin(r: SampledResponse, values: readonly number[], fromHz: number, toHz: number): { min: number; max: number; mean: number; minAtHz: number; maxAtHz: number } {
   const idx = indicesWithin(r, fromHz, toHz);
   if (idx.length === 0) return { min: NaN, max: NaN, mean: NaN, minAtHz: NaN, maxAtHz: NaN };
@@ -40,7 +43,14 @@ export function statsWithin(r: SampledResponse, values: readonly number[], fromH
     if (v > (values[hi] as number)) hi = i;
     sum += v;
   }
-  return { min: values[lo] as number, max: values[hi] as number, mean: sum / idx.length, minAtHz: r.frequencyHz[lo] as number, maxAtHz: r.frequencyHz[hi] as number };
+  let area = 0;
+  for (let k = 1; k < idx.length; k++) {
+    const a = idx[k - 1] as number;
+    const b = idx[k] as number;
+    area += (((values[a] as number) + (values[b] as number)) / 2) * ((r.frequencyHz[b] as number) - (r.frequencyHz[a] as number));
+  }
+  const span = (r.frequencyHz[idx[idx.length - 1] as number] as number) - (r.frequencyHz[idx[0] as number] as number);
+  return { min: values[lo] as number, max: values[hi] as number, mean: span > 0 ? area / span : sum / idx.length, minAtHz: r.frequencyHz[lo] as number, maxAtHz: r.frequencyHz[hi] as number };
 }
 
 /** Least-squares slope of `values` against frequency over [fromHz, toHz], per Hz (common practice). */

@@ -25,7 +25,11 @@ export function bandPassFigures(r: SampledResponse, centreHz: number, searchHz: 
   r.frequencyHz.forEach((f, i) => {
     if (Math.abs(f - centreHz) >= 2 * bandWidth) far = Math.max(far, r.powerDb[i] as number);
   });
+  // The delay peaks of a sharp band sit at its edges: read them there too, not only at the samples inside.
   const delay = statsWithin(r, r.groupDelayPs, b.lowHz, b.highHz);
+  const edges = [valueAt(r, r.groupDelayPs, b.lowHz), valueAt(r, r.groupDelayPs, b.highHz)];
+  delay.max = Math.max(delay.max, ...edges);
+  delay.min = Math.min(delay.min, ...edges);
   return {
     insertionLossDb: -b.peakDb,
     centreFrequencyHz: (b.lowHz + b.highHz) / 2,

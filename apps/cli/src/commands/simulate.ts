@@ -51,9 +51,15 @@ export function emit(text: string, out: string | undefined): void {
   else process.stdout.write(text);
 }
 
+/** The chip's name of a port id: its label when it has one (the names map holds labels and ids), else the id. */
+export function portLabel(chip: MeshNetlist, id: string): string {
+  for (const [name, target] of chip.portIdOf) if (target === id && name !== id) return name;
+  return id;
+}
+
 /** The JSON spectrum file of a connection, checked against the contracts schema before it is written. */
-export function spectrumFile(result: ConnectionResult): SpectrumFile {
-  return spectrumFileSchema.parse(toSpectrumFile(result));
+export function spectrumFile(result: ConnectionResult, chip?: MeshNetlist): SpectrumFile {
+  return spectrumFileSchema.parse(toSpectrumFile(result, chip ? { from: portLabel(chip, result.from), to: portLabel(chip, result.to) } : undefined));
 }
 
 type SimulateOptions = { from: string; to: string; span?: string; points: string; format: string; out?: string };
@@ -85,7 +91,7 @@ export function registerSimulateCommand(program: Command): void {
       if (options.format !== 'csv' && options.format !== 'json') throw new CliError(`--format must be csv, json or s2p, got "${options.format}"`);
       const result = simulateConnection(chip.netlist, { ...base, from, to });
       warn([result.run.warning]);
-      if (options.format === 'json') emit(`${JSON.stringify(spectrumFile(result))}\n`, options.out);
+      if (options.format === 'json') emit(`${JSON.stringify(spectrumFile(result, chip))}\n`, options.out);
       else emit(writeSpectrumCsv(result.spectrum, [`hexloom simulate from ${from} to ${to}`, `impulse steps ${result.run.steps}, residual energy ${result.run.residualEnergy.toExponential(2)}`]), options.out);
     });
 }

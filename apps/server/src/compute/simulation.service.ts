@@ -12,7 +12,7 @@ import { simulationCache } from '../db/schema/index.js';
 import { resolvePort } from './resolve-port.js';
 
 /** Version of the cached answer layout; bump it when the solver's answer changes meaning. */
-const CACHE_LAYOUT = 1;
+const CACHE_LAYOUT = 2;
 
 /** A spectrum answer and whether it came from the cache. */
 export type CachedSpectrum = { spectrum: SpectrumFile; cached: boolean; hash: string };
@@ -32,7 +32,8 @@ export class SimulationService {
     if (hit) return { spectrum: hit.answer as SpectrumFile, cached: true, hash };
     const chip = netlistFromMesh({ mesh, configuration: content });
     const result = simulateConnection(chip.netlist, { from, to, grid: body.grid, unitDelayS: chip.unitDelayS, referenceFrequencyHz: chip.referenceFrequencyHz });
-    const spectrum = toSpectrumFile(result);
+    const name = (id: string) => mesh.ports[mesh.portIndex.get(id) ?? -1]?.label ?? id;
+    const spectrum = toSpectrumFile(result, { from: name(from), to: name(to) });
     await this.db.insert(simulationCache).values({ hash, answer: spectrum }).onConflictDoNothing();
     return { spectrum, cached: false, hash };
   }

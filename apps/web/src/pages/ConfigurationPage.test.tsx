@@ -23,7 +23,7 @@ describe('ConfigurationPage', () => {
       expect(d.startsWith('M')).toBe(true);
       expect(d.match(/L/g)).toHaveLength(4);
     }
-    expect(screen.getByTestId('circuit-figures').textContent).toContain('rejectionDb');
+    expect(screen.getByTestId('circuit-figures').textContent).toContain('notchDepthDb');
   });
 
   it('loads an older version when its row is clicked', async () => {

@@ -47,7 +47,7 @@ export const demoVersion: ConfigurationVersion = {
   note: 'deeper notch',
   content: { schemaVersion: 1, mesh: definition, parkedState: 'bar', gates: [], circuits: [{ id: 'notch', kind: 'ring', ports: [IN, OUT], paths: [], couplers: [] }] },
   specs: [],
-  figures: { notch: { rejectionDb: 19.5, insertionLossDb: 7.51 } },
+  figures: { notch: { notchDepthDb: 19.5, insertionLossDb: 7.51, failedChecks: 0, checks: 3 } },
 };
 
 /** A notch at 0 Hz: 5 points of transmission and group delay. */
@@ -56,6 +56,8 @@ export const demoSpectrum: SpectrumFile = {
   kind: 'hexloom-spectrum',
   from: IN,
   to: OUT,
+  fromName: 'W01',
+  toName: 'E01',
   referenceFrequencyHz: 193.4e12,
   unitDelayS: 9.1e-12,
   method: 'direct-sum',

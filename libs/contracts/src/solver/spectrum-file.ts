@@ -30,6 +30,9 @@ export const spectrumFileSchema = z.object({
   kind: z.literal('hexloom-spectrum'),
   from: z.string(),
   to: z.string(),
+  /** The chip's names of the ports (labels such as W03), or their ids when unlabelled. */
+  fromName: z.string(),
+  toName: z.string(),
   referenceFrequencyHz: z.number().positive(),
   unitDelayS: z.number().positive(),
   method: z.enum(['fft', 'direct-sum']),
