@@ -1,4 +1,5 @@
-// Runs `hexloom yield` as a user would: worker threads, a seed, and the same answer however the work is split.
+// Runs `hexloom yield` as a user would: worker threads, a seed, and the same answer however the work is split
+// (over threads and over chunk sizes).
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -34,8 +35,15 @@ describe('hexloom yield', () => {
     expect(a.runs).toBe(24);
     expect(b.threads).toBe(2);
     expect(b.yield).toBe(a.yield);
+    expect(a.figures['rejectionDb']?.mean).toEqual(expect.any(Number));
     expect(b.figures['rejectionDb']?.mean).toBe(a.figures['rejectionDb']?.mean);
+    expect(b.figures['worstCheckRatio']?.mean).toBe(a.figures['worstCheckRatio']?.mean);
     expect(b.sensitivity?.length).toBeGreaterThan(0);
+    const chunked = hexloom('yield', configuration, '--spec', spec, '--runs', '24', '--chunk', '5', '--threads', '2', '--seed', '7', '--quiet', '-o', join(out, 'five.json'));
+    expect(chunked.status, chunked.stderr).toBe(0);
+    const c = JSON.parse(readFileSync(join(out, 'five.json'), 'utf8')) as Summary;
+    expect(c.yield).toBe(a.yield);
+    expect(c.figures).toEqual(a.figures);
   });
 
   it('loses yield when the phase errors are large', () => {

@@ -40,8 +40,8 @@ describe('hexloom yield', () => {
     const four = yieldSummary('4');
     expect(one.runs).toBe(6);
     expect(one.seed).toBe(42);
-    expect(one.figures['rejectionDb']?.std).toBeGreaterThan(0);
-    expect(one.figures['worstMarginDb']?.std).toBeGreaterThan(0);
+    expect(one.figures['notchDepthDb']?.std).toBeGreaterThan(0);
+    expect(one.figures['worstCheckRatio']?.std).toBeGreaterThan(0);
     expect(four).toEqual(one);
   }, 120_000);
 });

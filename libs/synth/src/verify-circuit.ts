@@ -111,10 +111,16 @@ export function verifyCircuit(input: VerifyInput): { verification: Verification[
  * `ignore` selects.
  */
 export function verificationCost(input: VerifyInput, ignore: (c: MaskCheck) => boolean = () => false): (chip: MeshNetlist, netlist: Netlist) => number {
+  const verify = coarseVerification(input);
+  return (chip, netlist) => verify(chip, netlist).reduce((m, v) => v.mask.checks.reduce((mm, c) => (ignore(c) ? mm : Math.max(mm, checkRatio(c))), m), 0);
+}
+
+/**
+ * Every output verified on the coarse Monte Carlo grid (no refinement, impulse stopped at -120 dB), on a compiled chip
+ * or a perturbed copy of its netlist: what parking searches and Monte Carlo runs check.
+ */
+export function coarseVerification(input: VerifyInput): (chip: MeshNetlist, netlist: Netlist) => Verification[] {
   const p = prepare(input);
   const offsetsHz = verificationOffsets(input.design, p.regions, input.unitDelayS, MONTE_CARLO_DENSITY);
-  return (chip, netlist) => {
-    const { verification } = check(p, chip, netlist, offsetsHz, undefined, { energyTolerance: 1e-12 });
-    return verification.reduce((m, v) => v.mask.checks.reduce((mm, c) => (ignore(c) ? mm : Math.max(mm, checkRatio(c))), m), 0);
-  };
+  return (chip, netlist) => check(p, chip, netlist, offsetsHz, undefined, { energyTolerance: 1e-12 }).verification;
 }

@@ -1,7 +1,11 @@
 /** One Monte Carlo run of a configured chip: random coupler and phase errors on every used gate, then the mask. */
 import type { Configuration, Mesh } from '@hexloom/mesh';
 import type { GatePerturbation } from '@hexloom/solver';
-import { checkMask } from './check-mask.js';
+import type { FilterSpec } from '@hexloom/contracts';
+import { checkMask, checkRatio } from './check-mask.js';
+import { designCircuit } from './design-circuit.js';
+import { SynthInputError } from './synth-input-error.js';
+import { coarseVerification } from './verify-circuit.js';
 import type { MaskRegion } from './mask-types.js';
 import type { MonteCarloRun } from './monte-carlo.js';
 import { responseFigures } from './response-figures.js';
@@ -66,6 +70,30 @@ export function yieldTrial(study: YieldStudy): (random: RandomStream) => MonteCa
         peakFrequencyHz: figures.peakFrequencyHz,
       },
     };
+  };
+}
+
+/** A study of a circuit against its whole specification: every output, its mask regions and its own targets. */
+export type SpecYieldStudy = { mesh: Mesh; configuration: Configuration; spec: FilterSpec; circuitId: string; tolerance: ToleranceModel };
+
+/**
+ * A trial that perturbs every used gate and verifies the circuit against its spec on every output (mask and targets,
+ * coarse grid); a run passes only when every check does. Figures: the worst check ratio (1 on the limit, see
+ * `checkRatio`) and the figures of the first main output.
+ * @throws SynthInputError when the spec cannot be designed or the circuit is not in the configuration.
+ */
+export function specYieldTrial(study: SpecYieldStudy): (random: RandomStream) => MonteCarloRun {
+  const circuit = study.configuration.circuits.find((c) => c.id === study.circuitId);
+  if (!circuit) throw new SynthInputError(`synth: there is no circuit ${study.circuitId} in this configuration (circuits: ${study.configuration.circuits.map((c) => c.id).join(', ') || 'none'})`);
+  const { design, unitDelayS } = designCircuit(study.spec.spec, study.mesh.definition.technology);
+  const verify = coarseVerification({ spec: study.spec, design, mesh: study.mesh, configuration: study.configuration, circuit, unitDelayS });
+  const gates = usedGates(study.configuration);
+  const chip = netlistFromMesh({ mesh: study.mesh, configuration: study.configuration });
+  return (random) => {
+    const verification = verify(chip, chip.withPerturbations(drawPerturbations(gates, study.tolerance, random)));
+    const checks = verification.flatMap((v) => v.mask.checks);
+    const main = verification.find((v) => v.role === 'main');
+    return { pass: checks.every((c) => c.pass), figures: { worstCheckRatio: checks.reduce((m, c) => Math.max(m, checkRatio(c)), 0), ...(main?.figures ?? {}) } };
   };
 }
 

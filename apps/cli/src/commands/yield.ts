@@ -5,12 +5,20 @@ import type { Command } from 'commander';
 import { SingleBar, Presets } from 'cli-progress';
 import { Piscina } from 'piscina';
 import { filterSpecSchema, type FilterSpec } from '@hexloom/contracts';
-import { buildMesh } from '@hexloom/mesh';
+import { buildMesh, type Configuration, type Mesh } from '@hexloom/mesh';
 import { designCircuit, gateSensitivities, MONTE_CARLO_DENSITY, type YieldChunkTask, planMonteCarlo, summariseMonteCarlo, verificationOffsets, type MaskRegion, type MonteCarloRun, type ToleranceModel } from '@hexloom/synth';
 import { CliError } from '../cli-error.js';
 import { loadConfiguration, meshErrors, readJsonFile, writeJson } from './mesh.js';
 
-type YieldOptions = { spec: string; runs: string; seed: string; chunk: string; threads?: string; couplerSigma?: string; phaseSigma?: string; sensitivity?: boolean; out?: string; quiet?: boolean };
+type YieldOptions = { circuit?: string; spec: string; runs: string; seed: string; chunk: string; threads?: string; couplerSigma?: string; phaseSigma?: string; sensitivity?: boolean; out?: string; quiet?: boolean };
+
+/** The circuit a spec was made for: the one whose ports include the spec's input (by id or label). */
+export function circuitOfSpec(configuration: Configuration, mesh: Mesh, spec: FilterSpec): string {
+  const input = mesh.ports[mesh.portIndex.get(spec.spec.from) ?? -1]?.id ?? spec.spec.from;
+  const found = configuration.circuits.find((c) => c.ports.includes(input));
+  if (!found) throw new CliError(`no circuit of the configuration uses the spec's input ${spec.spec.from}; name it with --circuit`);
+  return found.id;
+}
 
 /** The input and the observed output of a specification (the filtered output for filters, the first branch for delay sets). */
 export function observedPorts(spec: FilterSpec): { from: string; to: string } {
@@ -42,9 +50,10 @@ const sigma = (value: string, name: string): number => {
 export function registerYieldCommand(program: Command): void {
   program
     .command('yield')
-    .description('Monte Carlo yield of a configuration against its specification mask (coupler and phase errors, seeded, on all cores)')
+    .description('Monte Carlo yield of a configuration against its specification: every output, mask and targets (coupler and phase errors, seeded, on all cores)')
     .argument('<configuration>', 'configuration JSON file (e.g. written by hexloom synth)')
-    .requiredOption('--spec <file>', 'specification JSON file whose mask and ports are checked')
+    .requiredOption('--spec <file>', 'specification JSON file: every output is checked against its mask regions and the spec\'s own targets')
+    .option('--circuit <id>', 'circuit the spec describes (default: the one whose ports include the spec\'s input)')
     .option('--runs <n>', 'number of Monte Carlo runs', '1000')
     .option('--seed <n>', 'seed of the random streams; each run draws from its own stream of (seed, run number), so the same seed gives the same result', '1')
     .option('--chunk <n>', 'runs per chunk of work (one chunk per worker task); the result does not depend on it', '25')
@@ -69,6 +78,7 @@ export function registerYieldCommand(program: Command): void {
         phaseSigmaRad: o.phaseSigma === undefined ? (fromChip?.phaseSigmaRad ?? DEFAULT_TOLERANCE.phaseSigmaRad) : sigma(o.phaseSigma, 'phase-sigma'),
       };
       const { from, to } = observedPorts(spec);
+      const circuitId = o.circuit ?? circuitOfSpec(configuration, mesh, spec);
       const mask = spec.mask.regions as MaskRegion[];
       const { design, unitDelayS } = designCircuit(spec.spec, configuration.mesh.technology);
       const offsetsHz = verificationOffsets(design, mask, unitDelayS, MONTE_CARLO_DENSITY);
@@ -81,7 +91,7 @@ export function registerYieldCommand(program: Command): void {
       try {
         const results = await Promise.all(
           chunks.map(async (chunk) => {
-            const part = await pool.run({ configuration, from: portId(from), to: portId(to), offsetsHz, mask, tolerance, chunk });
+            const part = await pool.run({ configuration, spec, circuitId, tolerance, chunk });
             bar?.increment(chunk.count);
             return part;
           }),
@@ -90,7 +100,7 @@ export function registerYieldCommand(program: Command): void {
         const seconds = (performance.now() - started) / 1000;
         const summary = summariseMonteCarlo(results.flat());
         const sensitivity = o.sensitivity ? gateSensitivities({ mesh, configuration, from: portId(from), to: portId(to), offsetsHz, mask, tolerance }).slice(0, 10) : undefined;
-        writeJson({ spec: spec.name, from, to, seed, tolerance, threads, seconds, runsPerSecond: runs / seconds, ...summary, ...(sensitivity ? { sensitivity } : {}) }, o.out);
+        writeJson({ spec: spec.name, circuit: circuitId, from, to, seed, tolerance, threads, seconds, runsPerSecond: runs / seconds, ...summary, ...(sensitivity ? { sensitivity } : {}) }, o.out);
         process.stderr.write(`yield ${(100 * summary.yield).toFixed(1)} % +/- ${(100 * summary.yieldStdError).toFixed(1)} % over ${runs} runs (${(runs / seconds).toFixed(0)} runs/s on ${threads} threads)\n`);
       } finally {
         bar?.stop();
