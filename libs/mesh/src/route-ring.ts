@@ -15,11 +15,15 @@ export type RingPlacement = {
   readonly ring: readonly ResolvedStep[];
 };
 
-/** Checks a ring perimeter: loops on the hexagonal lattice are even and at least one cell (6 units). */
+/**
+ * Checks a ring perimeter: loops on the hexagonal lattice are even and at least one cell (6 units), and none has
+ * 8 units (one cell is 6, the next loop up, two cells, is 10; perimeters 6n - 2s of cell patches, common practice).
+ */
 export function checkPerimeter(perimeterUnits: number): RouteFailure | undefined {
   if (!Number.isInteger(perimeterUnits) || perimeterUnits % 2 !== 0)
-    return routeFailure('wrong-parity', `ring perimeter ${perimeterUnits} is not even; every closed loop on the hexagonal lattice is even (6, 8, 10, ...)`);
+    return routeFailure('wrong-parity', `ring perimeter ${perimeterUnits} is not even; every closed loop on the hexagonal lattice is even (6, 10, 12, 14, ...)`);
   if (perimeterUnits < 6) return routeFailure('too-short', `ring perimeter ${perimeterUnits} is below 6 units, the loop around one cell`);
+  if (perimeterUnits === 8) return routeFailure('invalid-request', 'no loop of 8 units exists on the hexagonal lattice: one cell is 6 units, two neighbouring cells 10 (6, 10, 12, 14, ...)');
   return undefined;
 }
 

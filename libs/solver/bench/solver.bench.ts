@@ -107,7 +107,7 @@ for (const [name, shape, points, everyNth] of [
   const { configuration, placed } = placeAll(mesh, [
     { id: 'notch', kind: 'ring', from: p[0]!, to: p[3]!, perimeterUnits: 6, kappa: 0.1 },
     { id: 'mzi', kind: 'mzi', from: p[6]!, to: p[9]!, lengthDifferenceUnits: 2 },
-    { id: 'delay', kind: 'delay-line', from: p[12]!, to: p[17]!, lengthUnits: name === '30x30' ? 80 : 24 },
+    { id: 'delay', kind: 'delay-line', from: name === '30x30' ? p[12]! : p[10]!, to: name === '30x30' ? p[17]! : p[14]!, lengthUnits: name === '30x30' ? 80 : 29 },
   ]);
   const chip = netlistFromMesh({ mesh, configuration });
   const fast = timeFast(chip, p[0]!, p[3]!, points, 5);
