@@ -32,7 +32,7 @@ describe('hexloom sparams --ports', () => {
   it('takes port ids that hold commas, mixed with labels, and numbers the ports in the order given', () => {
     const r = hexloom('sparams', CONFIG, '--ports', `${THIRD},in,${OUT}`, '--points', '8');
     expect(r.status, r.stderr).toBe(0);
-    expect(portLines(r.stdout)).toEqual([`! port 1 = ${THIRD}`, `! port 2 = ${IN}`, `! port 3 = ${OUT}`]);
+    expect(portLines(r.stdout)).toEqual([`! port 1 = ${THIRD}`, `! port 2 = in (${IN})`, `! port 3 = out (${OUT})`]);
     expect(readTouchstone(r.stdout, { fileName: 'x.s3p' }).portCount).toBe(3);
   }, 60_000);
 

@@ -3,7 +3,7 @@ import type { Command } from 'commander';
 import { S_PARAMETERS_SCHEMA_VERSION, sParametersFileSchema } from '@hexloom/contracts';
 import { sMatrix, writeTouchstone, type TouchstoneFormat, type TouchstoneVersion } from '@hexloom/solver';
 import { CliError } from '../cli-error.js';
-import { emit, loadChip, parseGrid, resolvePort, warn } from './simulate.js';
+import { emit, loadChip, parseGrid, portLabel, resolvePort, warn } from './simulate.js';
 
 /**
  * The ports of a `--ports` list: separated by `;`, or by commas outside parentheses, since a port id holds commas
@@ -69,7 +69,7 @@ export function registerSparamsCommand(program: Command): void {
       if (options.touchstone !== '1.1' && options.touchstone !== '2.0') throw new CliError(`--touchstone must be 1.1 or 2.0, got "${options.touchstone}"`);
       const data = options.data.toUpperCase();
       if (data !== 'MA' && data !== 'DB' && data !== 'RI') throw new CliError(`--data must be MA, DB or RI, got "${options.data}"`);
-      const comments = ['hexloom sparams', ...ports.map((p, i) => `port ${i + 1} = ${p}`)];
+      const comments = ['hexloom sparams', ...ports.map((p, i) => `port ${i + 1} = ${portLabel(chip, p)}${portLabel(chip, p) === p ? '' : ` (${p})`}`)];
       emit(
         writeTouchstone({ portCount: ports.length, frequenciesHz, re: s.re, im: s.im, referenceOhm: 50 }, { version: options.touchstone as TouchstoneVersion, format: data as TouchstoneFormat, comments }),
         options.out,
