@@ -57,7 +57,7 @@ export async function createHexloomApp(options: CreateHexloomAppOptions): Promis
     await app.init();
     return app;
   } catch (error) {
-    await database.client.close();
+    await database.close();
     throw error;
   }
 }

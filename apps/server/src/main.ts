@@ -6,6 +6,8 @@ import { join, resolve } from 'node:path';
 import { Logger } from '@nestjs/common';
 import { createHexloomApp } from './app.factory.js';
 import { findRepoRoot } from './common/find-repo-root.js';
+import { HEXLOOM_OPTIONS, type ResolvedOptions } from './common/hexloom-options.js';
+import { readServerEnvironment } from './common/server-environment.js';
 
 /** SESSION_SECRET, or one generated once and kept in the data dir (random per run for `memory`). */
 function sessionSecret(dataDir: string): string {
@@ -25,32 +27,25 @@ async function main(): Promise<void> {
   // A .env file at the repository root (see .env.example) fills in what the shell did not set.
   const envFile = join(root, '.env');
   if (existsSync(envFile)) process.loadEnvFile(envFile);
-  const port = Number(process.env['PORT'] ?? 3000);
-  if (!Number.isInteger(port) || port <= 0 || port > 65535) throw new Error(`PORT "${process.env['PORT']}" is not a TCP port`);
+  const { options, port, host } = readServerEnvironment(process.env);
   const envDataDir = process.env['HEXLOOM_DATA_DIR'];
   const dataDir = envDataDir === 'memory' ? 'memory' : resolve(envDataDir || join(root, 'data'));
-  const publicUrl = process.env['PUBLIC_URL'] || `http://localhost:${port}`;
-  const clientId = process.env['GITHUB_CLIENT_ID'];
-  const clientSecret = process.env['GITHUB_CLIENT_SECRET'];
-  const cookieSecure = process.env['HEXLOOM_COOKIE_SECURE'] === 'true' ? true : undefined;
-  const app = await createHexloomApp({
-    dataDir,
-    seedDemo: (process.env['HEXLOOM_SEED_DEMO'] ?? 'true') !== 'false',
-    seedDemoDesigns: (process.env['HEXLOOM_SEED_DEMO_DESIGNS'] ?? 'true') !== 'false',
-    webDistDir: join(root, 'apps', 'web', 'dist'),
-    publicUrl,
-    sessionSecret: sessionSecret(dataDir),
-    ...(clientId && clientSecret ? { github: { clientId, clientSecret } } : {}),
-    ...(cookieSecure ? { cookieSecure } : {}),
-    ...(process.env['SMTP_URL'] ? { smtpUrl: process.env['SMTP_URL'] } : {}),
-    logLevels: ['log', 'error', 'warn'],
-  });
+  const app = await createHexloomApp({ ...options, dataDir, webDistDir: join(root, 'apps', 'web', 'dist'), sessionSecret: sessionSecret(dataDir) });
   app.enableShutdownHooks();
-  await app.listen(port);
-  new Logger('Hexloom').log(`Hexloom is running at ${publicUrl}`);
+  await app.listen(port, host);
+  const logger = new Logger('Hexloom');
+  const resolved = app.get<ResolvedOptions>(HEXLOOM_OPTIONS);
+  if (resolved.localIdp) {
+    logger.warn(
+      `The built-in local sign-in is ON: whoever reaches ${resolved.publicUrl} can sign in as any account, owners included. ` +
+        'Keep it to your own machine; for a shared server set GITHUB_CLIENT_ID and GITHUB_CLIENT_SECRET.',
+    );
+  }
+  logger.log(`Hexloom is running at ${resolved.publicUrl} (listening on ${host}:${port})`);
 }
 
 main().catch((error: unknown) => {
-  console.error(error);
+  if (error instanceof Error && ['InvalidOptionsError', 'EnvironmentError', 'DataDirLockedError'].includes(error.name)) console.error(`hexloom: ${error.message}`);
+  else console.error(error);
   process.exit(1);
 });

@@ -16,7 +16,7 @@ describe('a fresh in-memory database', () => {
     sut = await openDatabase('memory');
   });
   afterAll(async () => {
-    await sut.client.close();
+    await sut.close();
   });
 
   it('has every table after the migrations ran', async () => {

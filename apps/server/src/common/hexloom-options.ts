@@ -24,6 +24,13 @@ export type HexloomOptions = {
   smtpUrl?: string;
   /** Sender address of Hexloom's e-mail (default `hexloom@localhost`). */
   mailFrom?: string;
+  /** Address the server listens on (default `127.0.0.1`: this machine only). */
+  host?: string;
+  /**
+   * The built-in local sign-in (anyone who reaches it picks an account). `true` turns it on anywhere; absent, it is
+   * on only without code-host credentials, listening on a loopback address, with an http loopback public URL.
+   */
+  localIdp?: boolean;
 };
 
 /** Options after defaults were applied. */
@@ -38,6 +45,9 @@ export type ResolvedOptions = {
   cookieSecure: boolean;
   smtpUrl: string | null;
   mailFrom: string;
+  host: string;
+  /** Whether sign-in goes through the built-in local identity provider (never with code-host credentials). */
+  localIdp: boolean;
 };
 
 /** Injection token of the ResolvedOptions. */

@@ -10,7 +10,7 @@ describe('resolveOptions', () => {
     expect(a.sessionSecret).not.toBe(b.sessionSecret);
   });
   it('turns Secure cookies on for an https public URL and drops a trailing slash', () => {
-    expect(resolveOptions({ dataDir: 'memory', seedDemo: false, publicUrl: 'https://hexloom.example/' })).toMatchObject({
+    expect(resolveOptions({ dataDir: 'memory', seedDemo: false, publicUrl: 'https://hexloom.example/', localIdp: true })).toMatchObject({
       publicUrl: 'https://hexloom.example',
       cookieSecure: true,
     });
@@ -21,5 +21,21 @@ describe('resolveOptions', () => {
   it('refuses a public URL with a path, naming it', () => {
     expect(() => resolveOptions({ dataDir: 'memory', seedDemo: false, publicUrl: 'http://h.example/app' })).toThrow(InvalidOptionsError);
     expect(() => resolveOptions({ dataDir: 'memory', seedDemo: false, publicUrl: 'http://h.example/app' })).toThrow(/"http:\/\/h.example\/app"/);
+  });
+});
+
+describe('resolveOptions and the built-in local sign-in', () => {
+  it('turns it on for a server only this machine reaches: loopback address and an http loopback URL', () => {
+    expect(resolveOptions({ dataDir: 'memory', seedDemo: false })).toMatchObject({ host: '127.0.0.1', localIdp: true });
+    expect(resolveOptions({ dataDir: 'memory', seedDemo: false, host: '::1', publicUrl: 'http://127.0.0.1:3000' }).localIdp).toBe(true);
+  });
+  it('refuses to start it on an https public URL or on every interface, saying what to set', () => {
+    expect(() => resolveOptions({ dataDir: 'memory', seedDemo: false, publicUrl: 'https://hexloom.example' })).toThrow(/no sign-in provider.*GITHUB_CLIENT_ID.*HEXLOOM_LOCAL_IDP=true/);
+    expect(() => resolveOptions({ dataDir: 'memory', seedDemo: false, host: '0.0.0.0' })).toThrow(InvalidOptionsError);
+    expect(() => resolveOptions({ dataDir: 'memory', seedDemo: false, localIdp: false })).toThrow(/turned off/);
+  });
+  it('starts it anywhere when asked explicitly, and never with code-host credentials', () => {
+    expect(resolveOptions({ dataDir: 'memory', seedDemo: false, host: '0.0.0.0', publicUrl: 'https://h.example', localIdp: true }).localIdp).toBe(true);
+    expect(resolveOptions({ dataDir: 'memory', seedDemo: false, host: '0.0.0.0', publicUrl: 'https://h.example', github: { clientId: 'id', clientSecret: 's' } }).localIdp).toBe(false);
   });
 });

@@ -1,18 +1,17 @@
 /** Global Nest module providing the Drizzle handle under the DATABASE token and closing it on shutdown. */
 import { type DynamicModule, Global, Inject, Injectable, Module, type OnApplicationShutdown } from '@nestjs/common';
-import type { PGlite } from '@electric-sql/pglite';
 import { DATABASE } from './database.js';
 import type { OpenDatabase } from './migrate.js';
 
-const PGLITE_CLIENT = Symbol('hexloom:pglite-client');
+const OPEN_DATABASE = Symbol('hexloom:open-database');
 
-/** Closes the PGlite client when the application shuts down. */
+/** Closes the database (and frees its data folder) when the application shuts down. */
 @Injectable()
 class DatabaseCloser implements OnApplicationShutdown {
-  constructor(@Inject(PGLITE_CLIENT) private readonly client: PGlite) {}
+  constructor(@Inject(OPEN_DATABASE) private readonly open: OpenDatabase) {}
 
   async onApplicationShutdown(): Promise<void> {
-    if (!this.client.closed) await this.client.close();
+    await this.open.close();
   }
 }
 
@@ -26,7 +25,7 @@ export class DatabaseModule {
       module: DatabaseModule,
       providers: [
         { provide: DATABASE, useValue: open.db },
-        { provide: PGLITE_CLIENT, useValue: open.client },
+        { provide: OPEN_DATABASE, useValue: open },
         DatabaseCloser,
       ],
       exports: [DATABASE],
