@@ -9,6 +9,7 @@ import { ComputeModule } from './compute/compute.module.js';
 import { ConfigurationsModule } from './configurations/configurations.module.js';
 import { DatabaseModule } from './db/database.module.js';
 import type { OpenDatabase } from './db/migrate.js';
+import { ComputePoolModule } from './compute/compute-pool.module.js';
 import { FiguresModule } from './figures/figures.module.js';
 import { HealthModule } from './health/health.module.js';
 import { InvitationsModule } from './invitations/invitations.module.js';
@@ -43,6 +44,7 @@ export class AppModule {
         AuthModule.forRoot(options),
         HealthModule,
         FiguresModule,
+        ComputePoolModule,
         TeamsModule,
         MembersModule,
         InvitationsModule,

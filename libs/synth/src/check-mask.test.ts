@@ -41,3 +41,13 @@ describe('checkMask', () => {
     expect(() => checkMask(response, [{ kind: 'stop', range: { fromHz: 5e9, toHz: 6e9 }, minRejectionDb: 30 }])).toThrow(/finer grid/);
   });
 });
+
+describe('checkMask on a long response', () => {
+  it('checks 1,000,000 points without running out of stack', () => {
+    const n = 1_000_000;
+    const response = { frequencyHz: Array.from({ length: n }, (_, i) => i), powerDb: Array.from({ length: n }, (_, i) => -(i % 7)), groupDelayPs: new Array<number>(n).fill(1) };
+    const report = checkMask(response, [{ kind: 'stop', range: { fromHz: 10, toHz: 20 }, minRejectionDb: 1 }]);
+    expect(report.checks[0]?.measured).toBe(0);
+    expect(responseFigures(response).rejectionDb).toBe(6);
+  });
+});

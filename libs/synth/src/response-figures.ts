@@ -50,7 +50,7 @@ export function responseFigures(response: SampledResponse): ResponseFigures {
     peakFrequencyHz: response.frequencyHz[peak] as number,
     bandwidth3dBHz: highEdge - lowEdge,
     band3dBHz: [lowEdge, highEdge],
-    rejectionDb: peakDb - Math.min(...response.powerDb),
+    rejectionDb: peakDb - response.powerDb.reduce((m, p) => Math.min(m, p), Infinity),
     delayRippleIn3dBBandPs: dMax - dMin,
     meanGroupDelayPs: response.groupDelayPs.reduce((sum, d) => sum + d, 0) / n,
   };

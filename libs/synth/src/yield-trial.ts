@@ -106,7 +106,7 @@ export type GateSensitivity = { gate: string; quantity: 'coupler' | 'phase'; dMa
 export function gateSensitivities(study: YieldStudy, stepRad = 0.01): GateSensitivity[] {
   const figure = (perturbations: Record<string, GatePerturbation>): number => {
     const response = simulateTransmission({ mesh: study.mesh, configuration: study.configuration, from: study.from, to: study.to, offsetsHz: study.offsetsHz, perturbations });
-    return study.mask.length > 0 ? (checkMask(response, study.mask).worst?.margin ?? 0) : Math.max(...response.powerDb);
+    return study.mask.length > 0 ? (checkMask(response, study.mask).worst?.margin ?? 0) : response.powerDb.reduce((m, p) => Math.max(m, p), -Infinity);
   };
   const out: GateSensitivity[] = [];
   for (const gate of usedGates(study.configuration)) {

@@ -3,7 +3,6 @@ import { Injectable } from '@nestjs/common';
 import { BENCH_CAUTIONS, buildBenchExport, writeBenchExportCsv, type BenchExport } from '@hexloom/bench';
 import { writeTouchstone } from '@hexloom/solver';
 import { CalibrationService } from '../chips/calibration.service.js';
-import { buildChipMesh } from '../chips/chips.service.js';
 import { SimulationService } from '../compute/simulation.service.js';
 import { ConfigurationsService } from '../configurations/configurations.service.js';
 import { DriveLimitError } from './drive-limit.error.js';
@@ -46,13 +45,8 @@ export class BenchExportService {
   /** Touchstone 1.1 (.sNp, RI, GHz) of the simulated S-parameters between `ports` on a span of offsets. */
   async touchstone(teamId: string, configurationId: string, number: number, q: { ports: string[]; startOffsetHz: number; stopOffsetHz: number; points: number }): Promise<ExportFile> {
     const ref = await this.configurations.findVersionOrFail(teamId, configurationId, number);
-    const { matrix } = this.simulation.sMatrix(ref.version.content, q.ports, { kind: 'span', startOffsetHz: q.startOffsetHz, stopOffsetHz: q.stopOffsetHz, points: q.points });
+    const { matrix, described } = await this.simulation.sMatrix(ref.version.content, q.ports, { kind: 'span', startOffsetHz: q.startOffsetHz, stopOffsetHz: q.stopOffsetHz, points: q.points });
     const approval = ref.version.status === 'approved' ? 'approved' : 'not approved';
-    const mesh = buildChipMesh(ref.version.content.mesh);
-    const described = (id: string): string => {
-      const port = mesh.ports[mesh.portIndex.get(id) ?? -1];
-      return port ? `${port.label ?? port.id} (${port.id}, ${port.wiredTo})` : id;
-    };
     const text = writeTouchstone(
       { portCount: matrix.ports.length, frequenciesHz: matrix.offsetsHz.map((f) => matrix.referenceFrequencyHz + f), re: matrix.re, im: matrix.im, referenceOhm: 50 },
       {
@@ -61,7 +55,7 @@ export class BenchExportService {
         frequencyUnit: 'GHZ',
         comments: [
           `Hexloom simulated S-parameters: chip ${ref.chip.name}, configuration ${ref.configuration.name}, version ${number} (${approval})`,
-          `ports: ${matrix.ports.map((p, i) => `${i + 1}=${described(p)}`).join(', ')}; optical frequencies around f0 = ${matrix.referenceFrequencyHz} Hz`,
+          `ports: ${described.map((p, i) => `${i + 1}=${p}`).join(', ')}; optical frequencies around f0 = ${matrix.referenceFrequencyHz} Hz`,
           ...BENCH_CAUTIONS.map((c) => `caution: ${c}`),
         ],
       },

@@ -1,22 +1,15 @@
 /** Chips: create from a template or a chip JSON, edit, read; every chip belongs to one team. */
 import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { Chip, CreateChip, MeshDefinitionFile, UpdateChip, User } from '@hexloom/contracts';
-import { buildMesh, deadGatesInUse, makeMeshDefinition, MESH_SCHEMA_VERSION, type Mesh } from '@hexloom/mesh';
+import { deadGatesInUse, makeMeshDefinition, MESH_SCHEMA_VERSION } from '@hexloom/mesh';
 import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import { AuditService } from '../audit/audit.service.js';
 import { DATABASE, type Database } from '../db/database.js';
 import { loginMap } from '../db/login-map.js';
 import { calibrations, chips, type ChipRow, configurations, configurationVersions } from '../db/schema/index.js';
-import { InvalidChipError } from './chip-errors.js';
+import { buildChipMesh } from './build-chip-mesh.js';
 
-/** Builds the mesh of a definition or throws a 422 naming why it cannot be built. */
-export function buildChipMesh(definition: MeshDefinitionFile): Mesh {
-  try {
-    return buildMesh(definition);
-  } catch (error) {
-    throw new InvalidChipError(error instanceof Error ? error.message : String(error));
-  }
-}
+export { buildChipMesh } from './build-chip-mesh.js';
 
 /** Chip operations; the team role was checked by TeamRolesGuard, the chip's team is checked here. */
 @Injectable()

@@ -30,6 +30,20 @@ const REASON: Record<number, string> = {
   500: 'Internal Server Error',
 };
 
+/** Longest error message the log keeps; database errors quote the whole query and its parameters. */
+const LOG_MESSAGE_CHARS = 300;
+
+/**
+ * An unexpected error for the log: its name, the first line of its message cut to 300 characters, and the code frames
+ * of its stack — never request bodies, query parameters or whatever else a message quotes past that.
+ */
+export function describeForLog(exception: unknown): string {
+  if (!(exception instanceof Error)) return `non-error thrown: ${typeof exception}`;
+  const first = (exception.message.split('\n')[0] ?? '').slice(0, LOG_MESSAGE_CHARS);
+  const frames = (exception.stack ?? '').split('\n').filter((l) => /^\s+at /.test(l)).slice(0, 12);
+  return [`${exception.name}: ${first}${exception.message.length > first.length ? ' [...]' : ''}`, ...frames].join('\n');
+}
+
 /** Maps domain errors by kind (with their extra members), library input errors to 422, Nest HTTP exceptions by status, anything else to a logged 500. */
 @Catch()
 export class ApiExceptionFilter implements ExceptionFilter {
@@ -68,7 +82,7 @@ export class ApiExceptionFilter implements ExceptionFilter {
             : exception.message;
       return { statusCode, error: REASON[statusCode] ?? exception.name, message };
     }
-    this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
+    this.logger.error(describeForLog(exception));
     return { statusCode: 500, error: REASON[500] ?? 'Error', message: 'Internal server error' };
   }
 }

@@ -46,7 +46,7 @@ export class ComputeController {
   @ApiOkResponse({ schema: openApiSchema(spectrumFileSchema) })
   async simulate(@Param(new ZodValidationPipe(versionParams)) p: VersionParams, @Body(new ZodValidationPipe(simulateBodySchema)) body: SimulateBody, @Res({ passthrough: true }) res: Response) {
     const ref = await this.configurations.findVersionOrFail(p.teamId, p.configurationId, p.number);
-    const answer = await this.simulation.simulate(ref.version.content, body);
+    const answer = await this.simulation.simulate(p.teamId, ref.version.content, body);
     res.setHeader('X-Hexloom-Cache', answer.cached ? 'hit' : 'miss');
     res.setHeader('ETag', `"${answer.hash}"`);
     return answer.spectrum;

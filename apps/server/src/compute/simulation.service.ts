@@ -1,72 +1,74 @@
-/** Simulation of a version: port-to-port spectra (cached by content hash), mask checks, S-matrices. */
+/** Simulation of a version on worker threads: port-to-port spectra (cached per team), mask checks, S-matrices. */
 import { Inject, Injectable } from '@nestjs/common';
 import type { ConfigurationFile, FrequencyGridBody, MaskCheckAnswer, MaskCheckBody, SimulateBody, SpectrumFile } from '@hexloom/contracts';
 import { canonicalJson, sha256Hex } from '@hexloom/bench';
-import type { Mesh } from '@hexloom/mesh';
-import { gridOffsetsHz, netlistFromMesh, simulateConnection, sMatrix, type SMatrix, toSpectrumFile, unitDelayS } from '@hexloom/solver';
-import { checkMask, responseFigures, simulateTransmission, type Transmission } from '@hexloom/synth';
-import { eq } from 'drizzle-orm';
-import { buildChipMesh } from '../chips/chips.service.js';
+import type { SMatrix } from '@hexloom/solver';
+import type { Transmission } from '@hexloom/synth';
+import { and, desc, eq, inArray, sql } from 'drizzle-orm';
 import { DATABASE, type Database } from '../db/database.js';
 import { simulationCache } from '../db/schema/index.js';
-import { resolvePort } from './resolve-port.js';
+import { ComputePoolService } from './compute-pool.service.js';
+import { gridOffsets } from './simulation-tasks.js';
 
 /** Version of the cached answer layout; bump it when the solver's answer changes meaning. */
-const CACHE_LAYOUT = 2;
+const CACHE_LAYOUT = 3;
 
-/** A spectrum answer and whether it came from the cache. */
+/** Cached answers kept per team; the least recently used beyond this are evicted. */
+export const CACHE_ENTRIES_PER_TEAM = 64;
+
+/** A spectrum answer and whether it came from the team's cache. */
 export type CachedSpectrum = { spectrum: SpectrumFile; cached: boolean; hash: string };
 
-/** Pure solver calls on a version's content; only the cache touches the database. */
+/** Solver calls on a version's content, run on the compute workers; only the cache touches the database. */
 @Injectable()
 export class SimulationService {
-  constructor(@Inject(DATABASE) private readonly db: Database) {}
+  constructor(
+    @Inject(DATABASE) private readonly db: Database,
+    private readonly compute: ComputePoolService,
+  ) {}
 
-  /** Spectrum from `from` to `to` on `grid`; equal content, ports and grid share one cached answer. */
-  async simulate(content: ConfigurationFile, body: SimulateBody): Promise<CachedSpectrum> {
-    const mesh = buildChipMesh(content.mesh);
-    const from = resolvePort(mesh, body.from, 'from');
-    const to = resolvePort(mesh, body.to, 'to');
-    const hash = await sha256Hex(canonicalJson({ layout: CACHE_LAYOUT, content, from, to, grid: body.grid }));
-    const [hit] = await this.db.select().from(simulationCache).where(eq(simulationCache.hash, hash));
-    if (hit) return { spectrum: hit.answer as SpectrumFile, cached: true, hash };
-    const chip = netlistFromMesh({ mesh, configuration: content });
-    const result = simulateConnection(chip.netlist, { from, to, grid: body.grid, unitDelayS: chip.unitDelayS, referenceFrequencyHz: chip.referenceFrequencyHz });
-    const name = (id: string) => mesh.ports[mesh.portIndex.get(id) ?? -1]?.label ?? id;
-    const spectrum = toSpectrumFile(result, { from: name(from), to: name(to) });
-    await this.db.insert(simulationCache).values({ hash, answer: spectrum }).onConflictDoNothing();
+  /** Spectrum from `from` to `to` on `grid`; equal content, ports and grid of one team share one cached answer. */
+  async simulate(teamId: string, content: ConfigurationFile, body: SimulateBody): Promise<CachedSpectrum> {
+    const hash = await sha256Hex(canonicalJson({ layout: CACHE_LAYOUT, teamId, content, from: body.from, to: body.to, grid: body.grid }));
+    const [hit] = await this.db.select().from(simulationCache).where(and(eq(simulationCache.hash, hash), eq(simulationCache.teamId, teamId)));
+    if (hit) {
+      await this.db.update(simulationCache).set({ usedAt: sql`now()` }).where(eq(simulationCache.hash, hash));
+      return { spectrum: hit.answer as SpectrumFile, cached: true, hash };
+    }
+    const spectrum = await this.compute.run({ kind: 'simulate', content, body });
+    await this.db.insert(simulationCache).values({ hash, teamId, answer: spectrum }).onConflictDoNothing();
+    await this.evict(teamId);
     return { spectrum, cached: false, hash };
   }
 
-  /** Power and group delay of the whole chip from `from` to `to` at the given offsets (Hz from f0). */
-  transmission(content: ConfigurationFile, fromRef: string, toRef: string, offsetsHz: readonly number[]): Transmission {
-    const mesh = buildChipMesh(content.mesh);
-    return simulateTransmission({ mesh, configuration: content, from: resolvePort(mesh, fromRef, 'from'), to: resolvePort(mesh, toRef, 'to'), offsetsHz });
+  /** Power and group delay of the whole chip from `fromRef` to `toRef` at the given offsets (Hz from f0). */
+  transmission(content: ConfigurationFile, fromRef: string, toRef: string, offsetsHz: readonly number[]): Promise<Transmission> {
+    return this.compute.run({ kind: 'transmission', content, from: fromRef, to: toRef, offsetsHz: [...offsetsHz] });
   }
 
   /** Mask report and the quoted figures of the response on the grid. */
-  maskCheck(content: ConfigurationFile, body: MaskCheckBody): MaskCheckAnswer {
-    const offsets = this.offsets(content, body.grid);
-    const response = this.transmission(content, body.from, body.to, offsets);
-    const report = checkMask(response, body.mask.regions);
-    const f = responseFigures(response);
-    return {
-      ...report,
-      figures: { insertionLossDb: f.insertionLossDb, peakFrequencyHz: f.peakFrequencyHz, bandwidth3dBHz: f.bandwidth3dBHz, rejectionDb: f.rejectionDb, delayRippleIn3dBBandPs: f.delayRippleIn3dBBandPs },
-    };
+  maskCheck(content: ConfigurationFile, body: MaskCheckBody): Promise<MaskCheckAnswer> {
+    return this.compute.run({ kind: 'mask-check', content, body });
   }
 
-  /** S-matrix between ports (ids or labels) on a grid. */
-  sMatrix(content: ConfigurationFile, portRefs: readonly string[], grid: FrequencyGridBody): { matrix: SMatrix; mesh: Mesh } {
-    const mesh = buildChipMesh(content.mesh);
-    const ports = portRefs.map((p, i) => resolvePort(mesh, p, `ports.${i}`));
-    const chip = netlistFromMesh({ mesh, configuration: content });
-    return { matrix: sMatrix(chip.netlist, { ports, grid, unitDelayS: chip.unitDelayS, referenceFrequencyHz: chip.referenceFrequencyHz }), mesh };
+  /** S-matrix between ports (ids or labels) on a grid, each port described by label, id and wiring. */
+  sMatrix(content: ConfigurationFile, portRefs: readonly string[], grid: FrequencyGridBody): Promise<{ matrix: SMatrix; described: string[] }> {
+    return this.compute.run({ kind: 's-matrix', content, ports: [...portRefs], grid });
   }
 
   /** Offsets (Hz from f0) of a grid on this chip. */
   offsets(content: ConfigurationFile, grid: FrequencyGridBody): number[] {
-    const { unitLengthUm, groupIndex } = content.mesh.technology;
-    return Array.from(gridOffsetsHz(grid, unitDelayS({ unitLengthUm, groupIndex })));
+    return gridOffsets(content, grid);
+  }
+
+  /** Drops the team's least recently used answers beyond `CACHE_ENTRIES_PER_TEAM`. */
+  private async evict(teamId: string): Promise<void> {
+    const stale = await this.db
+      .select({ hash: simulationCache.hash })
+      .from(simulationCache)
+      .where(eq(simulationCache.teamId, teamId))
+      .orderBy(desc(simulationCache.usedAt), desc(simulationCache.createdAt))
+      .offset(CACHE_ENTRIES_PER_TEAM);
+    if (stale.length > 0) await this.db.delete(simulationCache).where(inArray(simulationCache.hash, stale.map((s) => s.hash)));
   }
 }

@@ -6,13 +6,13 @@ import type {
 import { checkConfiguration, deadGatesInUse, emptyConfiguration } from '@hexloom/mesh';
 import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
 import { AuditService } from '../audit/audit.service.js';
+import { ComputePoolService } from '../compute/compute-pool.service.js';
 import { buildChipMesh, ChipsService } from '../chips/chips.service.js';
 import { DATABASE, type Database, type DbExecutor } from '../db/database.js';
 import { loginMap } from '../db/login-map.js';
 import { type ChipRow, chips, configurations, type ConfigurationRow, configurationVersions, type ConfigurationVersionRow } from '../db/schema/index.js';
 import { InvalidContentError, StaleVersionError } from './configuration-errors.js';
 import { diffVersions } from './diff-versions.js';
-import { recomputeFigures } from './recompute-figures.js';
 
 /** A version with the configuration and chip it belongs to. */
 export type VersionRef = { chip: ChipRow; configuration: ConfigurationRow; version: ConfigurationVersionRow };
@@ -24,6 +24,7 @@ export class ConfigurationsService {
     @Inject(DATABASE) private readonly db: Database,
     private readonly chips: ChipsService,
     private readonly audit: AuditService,
+    private readonly compute: ComputePoolService,
   ) {}
 
   /** Configuration `configurationId` of team `teamId`, or 404. */
@@ -72,7 +73,7 @@ export class ConfigurationsService {
   async create(actor: User, teamId: string, chipId: string, body: CreateConfiguration): Promise<ConfigurationDetail> {
     const chip = await this.chips.findRowOrFail(teamId, chipId);
     const content = body.content ?? (emptyConfiguration(chip.definition, 'bar') as ConfigurationFile);
-    const figures = this.checkContent(content, chip, body.specs);
+    const figures = await this.checkContent(content, chip, body.specs);
     const id = await this.db.transaction(async (tx) => {
       const [row] = await tx.insert(configurations).values({ teamId, chipId, name: body.name, createdBy: actor.id }).returning();
       if (!row) throw new Error(`ConfigurationsService.create: insert of "${body.name}" returned no row`);
@@ -89,7 +90,7 @@ export class ConfigurationsService {
    */
   async save(actor: User, teamId: string, configurationId: string, body: SaveVersion): Promise<ConfigurationVersion> {
     const configuration = await this.findRowOrFail(teamId, configurationId);
-    const figures = this.checkContent(body.content, await this.chips.findRowOrFail(teamId, configuration.chipId), body.specs);
+    const figures = await this.checkContent(body.content, await this.chips.findRowOrFail(teamId, configuration.chipId), body.specs);
     const saved = await this.db.transaction(async (tx) => {
       const [bumped] = await tx
         .update(configurations)
@@ -165,7 +166,7 @@ export class ConfigurationsService {
    * 422 when the content is for a chip of another shape, its mesh cannot be built, it breaks the mesh rules, or a spec
    * names a circuit it does not have; otherwise the figures to save, recomputed from the content and its specs.
    */
-  private checkContent(content: ConfigurationFile, chip: ChipRow, specs: readonly CircuitSpec[]): CircuitFigures {
+  private async checkContent(content: ConfigurationFile, chip: ChipRow, specs: CircuitSpec[]): Promise<CircuitFigures> {
     if (JSON.stringify(content.mesh.shape) !== JSON.stringify(chip.definition.shape)) {
       throw new InvalidContentError(`The content is for a mesh of shape ${JSON.stringify(content.mesh.shape)}, but chip "${chip.name}" has ${JSON.stringify(chip.definition.shape)}`, [
         { path: 'content.mesh.shape', message: 'not the chip\'s shape' },
@@ -183,7 +184,7 @@ export class ConfigurationsService {
     const orphans = specs.filter((s) => !ids.has(s.circuitId));
     if (orphans.length > 0)
       throw new InvalidContentError(`A spec names circuit ${orphans.map((s) => `"${s.circuitId}"`).join(', ')}, which the content does not have`, orphans.map((s) => ({ path: 'specs', message: `no circuit ${s.circuitId}` })));
-    return recomputeFigures(mesh, content, specs).figures;
+    return specs.length === 0 ? {} : this.compute.run({ kind: 'figures', content, specs });
   }
 
   private async summaries(rows: ConfigurationRow[]): Promise<ConfigurationSummary[]> {

@@ -59,7 +59,7 @@ export class MeasurementsService {
     if (!row) throw new NotFoundException(`Measurement "${measurementId}" not found on version ${number}`);
     const f0 = ref.version.content.mesh.technology.referenceFrequencyHz;
     const offsetHz = row.points.frequencyHz.map((f) => f - f0);
-    const simulated = this.simulation.transmission(ref.version.content, row.fromPort, row.toPort, offsetHz);
+    const simulated = await this.simulation.transmission(ref.version.content, row.fromPort, row.toPort, offsetHz);
     const comparison = compareSpectra({ offsetHz: simulated.frequencyHz, powerDb: simulated.powerDb }, { offsetHz, powerDb: row.points.powerDb });
     return { measurementId, ...comparison };
   }

@@ -2,7 +2,7 @@
 import { z } from 'zod';
 import { circuitSchema, configurationSchema } from '../mesh/configuration.js';
 import { routeRequestSchema } from '../mesh/route-request.js';
-import { frequencyGridSchema } from '../solver/frequency-grid.js';
+import { serverFrequencyGridSchema } from '../solver/frequency-grid.js';
 import { filterSpecSchema } from '../synth/filter-spec.js';
 import { maskSchema } from '../synth/mask.js';
 import { circuitSpecSchema } from './configuration-version.js';
@@ -75,11 +75,11 @@ export const rerouteCircuitBodySchema = z.object({ request: routeRequestSchema.o
 export type RerouteCircuitBody = z.infer<typeof rerouteCircuitBodySchema>;
 
 /** POST .../simulate body: ports by id or label, a grid (span or one FSR). */
-export const simulateBodySchema = z.object({ from: portRef, to: portRef, grid: frequencyGridSchema });
+export const simulateBodySchema = z.object({ from: portRef, to: portRef, grid: serverFrequencyGridSchema });
 export type SimulateBody = z.infer<typeof simulateBodySchema>;
 
 /** POST .../mask-check body. */
-export const maskCheckBodySchema = z.object({ from: portRef, to: portRef, grid: frequencyGridSchema, mask: maskSchema });
+export const maskCheckBodySchema = z.object({ from: portRef, to: portRef, grid: serverFrequencyGridSchema, mask: maskSchema });
 export type MaskCheckBody = z.infer<typeof maskCheckBodySchema>;
 
 /** POST .../mask-check answer. */

@@ -1,13 +1,13 @@
 /** Monte Carlo yield as a background job: start body, job answer, progress events. */
 import { z } from 'zod';
-import { frequencyGridSchema } from '../solver/frequency-grid.js';
+import { serverFrequencyGridSchema } from '../solver/frequency-grid.js';
 import { maskSchema } from '../synth/mask.js';
 
 /** POST .../yield-jobs body: perturb every used gate with seeded normal errors and check the mask. */
 export const startYieldJobSchema = z.object({
   from: z.string().min(1),
   to: z.string().min(1),
-  grid: frequencyGridSchema,
+  grid: serverFrequencyGridSchema,
   mask: maskSchema,
   runs: z.number().int().min(1).max(20_000),
   seed: z.number().int().min(0).max(2 ** 31 - 1),

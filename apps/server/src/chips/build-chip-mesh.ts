@@ -1,0 +1,13 @@
+/** Builds the mesh of a chip definition, or names why it cannot be built (a 422). */
+import type { MeshDefinitionFile } from '@hexloom/contracts';
+import { buildMesh, type Mesh } from '@hexloom/mesh';
+import { InvalidChipError } from './chip-errors.js';
+
+/** Builds the mesh of a definition or throws a 422 naming why it cannot be built. */
+export function buildChipMesh(definition: MeshDefinitionFile): Mesh {
+  try {
+    return buildMesh(definition);
+  } catch (error) {
+    throw new InvalidChipError(error instanceof Error ? error.message : String(error));
+  }
+}
