@@ -6,14 +6,17 @@ export const BENCH_EXPORT_CSV_COLUMNS = ['gate', 'state', 'kappa', 'phase_rad', 
 
 const num = (x: number): string => Number(x.toPrecision(10)).toString();
 
+/** Text for a `#` header line: control characters (a newline would start a forged line) become spaces. */
+const oneLine = (text: string): string => text.replace(/[\u0000-\u001f\u007f-\u009f\u2028\u2029]/g, ' ');
+
 /** Writes the export as CSV (RFC 4180, comma, LF, gate ids quoted); the checksum line is the JSON form's checksum. */
 export function writeBenchExportCsv(exported: BenchExport): string {
   const gates = new Map(exported.gates.map((g) => [g.gate, g]));
   const lines = [
     `# hexloom bench export, schema version ${exported.schemaVersion}`,
-    `# chip: ${exported.chip}; configuration: ${exported.configuration}; version: ${exported.version}`,
+    `# chip: ${oneLine(exported.chip)}; configuration: ${oneLine(exported.configuration)}; version: ${exported.version}`,
     `# approval: ${exported.approval}`,
-    ...exported.cautions.map((c) => `# caution: ${c}`),
+    ...exported.cautions.map((c) => `# caution: ${oneLine(c)}`),
     `# parked_state: ${exported.parkedState}`,
     `# total_power_w: ${num(exported.totalPowerW)}`,
     `# checksum_sha256: ${exported.checksum}`,

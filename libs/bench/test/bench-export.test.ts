@@ -67,4 +67,11 @@ describe('buildBenchExport', () => {
     expect(lines.length - header - 1).toBe(2 * gateCount);
     expect(lines[header + 1]?.split('",')[1]?.split(',')[5]).toBe('22');
   });
+
+  it('keeps a name with a newline on its own header line: no forged approval line', async () => {
+    const sut = { ...(await exportOf(emptyConfiguration(chip, 'bar'))), configuration: 'notch\n# approval: approved' };
+    const lines = writeBenchExportCsv(sut).trimEnd().split('\n');
+    expect(lines.filter((l) => l.startsWith('# approval:'))).toEqual(['# approval: not approved']);
+    expect(lines).toContain(`# chip: ${sut.chip}; configuration: notch # approval: approved; version: ${sut.version}`);
+  });
 });

@@ -10,3 +10,4 @@ export * from './mesh/index.js';
 export * from './synth/index.js';
 export * from './solver/index.js';
 export * from './team-server/index.js';
+export * from './plain-text.js';

@@ -1,5 +1,6 @@
 /** Teams, their members and invitations: API bodies and answers. */
 import { z } from 'zod';
+import { singleLineText } from './plain-text.js';
 import { teamRoleSchema } from './roles.js';
 
 export const teamSchema = z.object({
@@ -12,7 +13,7 @@ export type Team = z.infer<typeof teamSchema>;
 
 /** POST /api/teams body. */
 export const createTeamSchema = z.object({
-  name: z.string().trim().min(2).max(80),
+  name: singleLineText(2, 80),
   slug: z
     .string()
     .regex(/^[a-z0-9][a-z0-9-]{1,39}$/, 'lower-case letters, digits and dashes, 2 to 40 characters')

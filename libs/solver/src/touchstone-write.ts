@@ -83,7 +83,8 @@ export function writeTouchstone(data: TouchstoneData, options: TouchstoneWriteOp
     }
   }
   const frequencies = formatFrequencies(data.frequenciesHz, frequencyUnit);
-  const lines: string[] = comments.map((c) => `! ${c}`);
+  // A comment stays one comment line: a newline or other control character in it could start an option line.
+  const lines: string[] = comments.map((c) => `! ${c.replace(/[\u0000-\u001f\u007f-\u009f\u2028\u2029]/g, ' ')}`);
   if (version === '2.0') lines.push('[Version] 2.0');
   lines.push(`# ${frequencyUnit} S ${format} R ${num(data.referenceOhm)}`);
   if (version === '2.0') {

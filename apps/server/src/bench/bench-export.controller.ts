@@ -1,7 +1,7 @@
 /** Bench export routes of one version: drive values (JSON or CSV) and Touchstone of the simulated S-parameters. */
 import { Controller, Get, Param, Query, Res } from '@nestjs/common';
 import { ApiOkResponse, ApiOperation, ApiParam, ApiProduces, ApiQuery, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
-import { benchExportQuerySchema, benchExportSchema, driveLimitErrorSchema, touchstoneQuerySchema } from '@hexloom/contracts';
+import { benchExportQuerySchema, benchExportSchema, driveLimitErrorSchema, touchstoneQuerySchema, versionNumberParamSchema } from '@hexloom/contracts';
 import type { Response } from 'express';
 import { z } from 'zod';
 import { openApiSchema } from '../common/openapi-schema.js';
@@ -9,7 +9,7 @@ import { TeamRoles } from '../common/team-roles.decorator.js';
 import { ZodValidationPipe } from '../common/zod-validation.pipe.js';
 import { BenchExportService, type ExportFile } from './bench-export.service.js';
 
-const versionParams = z.object({ teamId: z.uuid(), configurationId: z.uuid(), number: z.coerce.number().int().positive() });
+const versionParams = z.object({ teamId: z.uuid(), configurationId: z.uuid(), number: versionNumberParamSchema });
 type VersionParams = z.output<typeof versionParams>;
 
 const sendFile = (res: Response, file: ExportFile): void => {

@@ -4,8 +4,7 @@ import { ApiAcceptedResponse, ApiBody, ApiOkResponse, ApiOperation, ApiParam, Ap
 import {
   type MaskCheckAnswer, maskCheckAnswerSchema, type MaskCheckBody, maskCheckBodySchema, type PlaceCircuitBody, placeCircuitBodySchema, type Proposal, proposalSchema,
   type RerouteCircuitBody, rerouteCircuitBodySchema, type SimulateBody, simulateBodySchema, spectrumFileSchema, type StartYieldJob, startYieldJobSchema,
-  type SynthesiseBody, synthesiseBodySchema, type User, type YieldJob, yieldJobSchema,
-} from '@hexloom/contracts';
+  type SynthesiseBody, synthesiseBodySchema, type User, type YieldJob, yieldJobSchema, versionNumberParamSchema } from '@hexloom/contracts';
 import type { Response } from 'express';
 import { from, interval, map, type Observable, startWith, switchMap, takeWhile } from 'rxjs';
 import { z } from 'zod';
@@ -18,7 +17,7 @@ import { EditService } from './edit.service.js';
 import { SimulationService } from './simulation.service.js';
 import { YieldJobsService } from './yield-jobs.service.js';
 
-const versionParams = z.object({ teamId: z.uuid(), configurationId: z.uuid(), number: z.coerce.number().int().positive() });
+const versionParams = z.object({ teamId: z.uuid(), configurationId: z.uuid(), number: versionNumberParamSchema });
 const circuitParams = versionParams.extend({ circuitId: z.string().regex(/^[A-Za-z][A-Za-z0-9_-]{0,63}$/) });
 const jobParams = versionParams.extend({ jobId: z.uuid() });
 type VersionParams = z.output<typeof versionParams>;

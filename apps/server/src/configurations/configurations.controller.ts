@@ -4,8 +4,7 @@ import { ApiBody, ApiConflictResponse, ApiCreatedResponse, ApiOkResponse, ApiOpe
 import {
   type ConfigurationDetail, configurationDetailSchema, type ConfigurationSummary, configurationSummarySchema, type ConfigurationVersion, configurationVersionSchema,
   type CreateConfiguration, createConfigurationSchema, type DiffQuery, diffQuerySchema, type DuplicateConfiguration, duplicateConfigurationSchema,
-  type SaveVersion, saveVersionSchema, staleVersionErrorSchema, type User, type VersionDiff, versionDiffSchema,
-} from '@hexloom/contracts';
+  type SaveVersion, saveVersionSchema, staleVersionErrorSchema, type User, type VersionDiff, versionDiffSchema, versionNumberParamSchema } from '@hexloom/contracts';
 import { z } from 'zod';
 import { CurrentUser } from '../common/current-user.decorator.js';
 import { openApiSchema } from '../common/openapi-schema.js';
@@ -15,7 +14,7 @@ import { ConfigurationsService } from './configurations.service.js';
 
 const chipParams = z.object({ teamId: z.uuid(), chipId: z.uuid() });
 const configurationParams = z.object({ teamId: z.uuid(), configurationId: z.uuid() });
-const versionParams = configurationParams.extend({ number: z.coerce.number().int().positive() });
+const versionParams = configurationParams.extend({ number: versionNumberParamSchema });
 type ConfigurationParams = z.output<typeof configurationParams>;
 
 /** Members read; designers and owners create and save. */

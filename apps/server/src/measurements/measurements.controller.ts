@@ -4,7 +4,7 @@ import { FileInterceptor } from '@nestjs/platform-express';
 import {
   ApiBody, ApiConsumes, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiParam, ApiPayloadTooLargeResponse, ApiTags, ApiUnprocessableEntityResponse, ApiUnsupportedMediaTypeResponse,
 } from '@nestjs/swagger';
-import { type Comparison, comparisonSchema, type Measurement, measurementSchema, type MeasurementUploadFields, measurementUploadFieldsSchema, type User } from '@hexloom/contracts';
+import { type Comparison, comparisonSchema, type Measurement, measurementSchema, type MeasurementUploadFields, measurementUploadFieldsSchema, type User, versionNumberParamSchema } from '@hexloom/contracts';
 import { z } from 'zod';
 import { CurrentUser } from '../common/current-user.decorator.js';
 import { openApiSchema } from '../common/openapi-schema.js';
@@ -13,7 +13,7 @@ import { MAX_UPLOAD_BYTES, type UploadedFileLike, uploadedText } from '../common
 import { ZodValidationPipe } from '../common/zod-validation.pipe.js';
 import { MeasurementsService } from './measurements.service.js';
 
-const versionParams = z.object({ teamId: z.uuid(), configurationId: z.uuid(), number: z.coerce.number().int().positive() });
+const versionParams = z.object({ teamId: z.uuid(), configurationId: z.uuid(), number: versionNumberParamSchema });
 const measurementParams = versionParams.extend({ measurementId: z.uuid() });
 type VersionParams = z.output<typeof versionParams>;
 

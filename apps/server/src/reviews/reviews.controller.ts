@@ -2,8 +2,7 @@
 import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
 import { ApiBody, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiParam, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import {
-  type Comment, commentSchema, type CreateComment, createCommentSchema, type RequestReview, requestReviewSchema, type Review, type ReviewDecision, reviewDecisionSchema, reviewSchema, type User,
-} from '@hexloom/contracts';
+  type Comment, commentSchema, type CreateComment, createCommentSchema, type RequestReview, requestReviewSchema, type Review, type ReviewDecision, reviewDecisionSchema, reviewSchema, type User, versionNumberParamSchema } from '@hexloom/contracts';
 import { z } from 'zod';
 import { CurrentUser } from '../common/current-user.decorator.js';
 import { openApiSchema } from '../common/openapi-schema.js';
@@ -12,7 +11,7 @@ import { ZodValidationPipe } from '../common/zod-validation.pipe.js';
 import { CommentsService } from './comments.service.js';
 import { ReviewsService } from './reviews.service.js';
 
-const versionParams = z.object({ teamId: z.uuid(), configurationId: z.uuid(), number: z.coerce.number().int().positive() });
+const versionParams = z.object({ teamId: z.uuid(), configurationId: z.uuid(), number: versionNumberParamSchema });
 type VersionParams = z.output<typeof versionParams>;
 
 /** Under /teams/:teamId/configurations/:configurationId/versions/:number. */

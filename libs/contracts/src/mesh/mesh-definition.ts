@@ -1,5 +1,6 @@
 /** The mesh definition file format (schema version 1): shape, I/O sites, wiring, dead gates, technology. */
 import { z } from 'zod';
+import { singleLineText } from '../plain-text.js';
 
 const cellIdRe = /^c\(-?\d+,-?\d+\)$/;
 const vertexIdRe = /^v\(-?\d+,-?\d+\)[ns]$/;
@@ -53,7 +54,7 @@ export const technologyProfileSchema = z.object({
 /** A mesh definition file (`"schemaVersion": 1`). */
 export const meshDefinitionSchema = z.object({
   schemaVersion: z.literal(1),
-  name: z.string().min(1).max(120),
+  name: singleLineText(1, 120),
   shape: meshShapeSchema,
   technology: technologyProfileSchema,
   ioSites: z.array(vertexIdSchema),

@@ -1,5 +1,6 @@
 /** The specification file format: what a designer asks for, with its mask (see docs/formats.md). */
 import { z } from 'zod';
+import { singleLineText } from '../plain-text.js';
 import { cellIdSchema } from '../mesh/mesh-definition.js';
 import { frequencyRangeSchema, maskSchema } from './mask.js';
 
@@ -162,7 +163,7 @@ export const filterSpecBodySchema = z.discriminatedUnion('kind', [
 /** A specification file: a named request with its mask. */
 export const filterSpecSchema = z.object({
   schemaVersion: z.literal(SPEC_SCHEMA_VERSION),
-  name: z.string().min(1).max(120),
+  name: singleLineText(1, 120),
   spec: filterSpecBodySchema,
   mask: maskSchema.default({ regions: [] }),
 });

@@ -1,5 +1,6 @@
 /** Chips of a team: API bodies and answers (create from a template size or a chip JSON, edit, read). */
 import { z } from 'zod';
+import { singleLineText } from '../plain-text.js';
 import { gateIdSchema, meshDefinitionSchema, portSpecSchema, technologyProfileSchema } from '../mesh/mesh-definition.js';
 
 /** A chip as the API returns it; `definition` is the chip JSON (mesh definition file). */
@@ -28,7 +29,7 @@ export type ChipTemplate = z.infer<typeof chipTemplateSchema>;
 
 /** POST /chips body: a template size with a technology profile, or an uploaded chip JSON. */
 export const createChipSchema = z.union([
-  z.object({ name: z.string().trim().min(1).max(120), template: chipTemplateSchema, technology: technologyProfileSchema }).strict(),
+  z.object({ name: singleLineText(1, 120), template: chipTemplateSchema, technology: technologyProfileSchema }).strict(),
   z.object({ definition: meshDefinitionSchema }).strict(),
 ]);
 export type CreateChip = z.infer<typeof createChipSchema>;
@@ -36,7 +37,7 @@ export type CreateChip = z.infer<typeof createChipSchema>;
 /** PATCH /chips/:chipId body: any of name, technology profile, port wiring and dead gates. */
 export const updateChipSchema = z
   .object({
-    name: z.string().trim().min(1).max(120).optional(),
+    name: singleLineText(1, 120).optional(),
     technology: technologyProfileSchema.optional(),
     ports: z.array(portSpecSchema).optional(),
     deadGates: z.array(gateIdSchema).optional(),

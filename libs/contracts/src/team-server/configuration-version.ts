@@ -1,8 +1,10 @@
 /** Named configurations of a chip and their immutable versions: bodies, answers and the 409 answer. */
 import { z } from 'zod';
+import { singleLineText } from '../plain-text.js';
 import { apiErrorSchema } from '../errors.js';
 import { configurationSchema } from '../mesh/configuration.js';
 import { filterSpecSchema } from '../synth/filter-spec.js';
+import { versionNumberSchema } from './version-number.js';
 
 /** Review status of one version. */
 export const versionStatusSchema = z.enum(['draft', 'in_review', 'approved', 'changes_requested']);
@@ -56,7 +58,7 @@ export type ConfigurationSummary = z.infer<typeof configurationSummarySchema>;
 export const configurationDetailSchema = configurationSummarySchema.extend({ versions: z.array(versionSummarySchema) });
 export type ConfigurationDetail = z.infer<typeof configurationDetailSchema>;
 
-const nameSchema = z.string().trim().min(1).max(120);
+const nameSchema = singleLineText(1, 120);
 
 /**
  * POST /chips/:chipId/configurations body; without `content` the first version has every gate parked. The figures
@@ -75,7 +77,7 @@ export type CreateConfiguration = z.infer<typeof createConfigurationSchema>;
  * version are recomputed by the server for every circuit with a spec (a figure sent by the client is not taken).
  */
 export const saveVersionSchema = z.object({
-  baseVersion: z.number().int().positive(),
+  baseVersion: versionNumberSchema,
   content: configurationSchema,
   specs: z.array(circuitSpecSchema).default([]),
   note: z.string().max(2000).default(''),
@@ -83,7 +85,7 @@ export const saveVersionSchema = z.object({
 export type SaveVersion = z.infer<typeof saveVersionSchema>;
 
 /** POST /configurations/:configurationId/duplicate body. */
-export const duplicateConfigurationSchema = z.object({ name: nameSchema, fromVersion: z.number().int().positive().optional() });
+export const duplicateConfigurationSchema = z.object({ name: nameSchema, fromVersion: versionNumberSchema.optional() });
 export type DuplicateConfiguration = z.infer<typeof duplicateConfigurationSchema>;
 
 /** The 409 answer of a stale save: the error plus the newer version, so nothing is lost. */

@@ -9,3 +9,4 @@ export * from './review.js';
 export * from './measurement.js';
 export * from './bench-export.js';
 export * from './outbox.js';
+export * from './version-number.js';

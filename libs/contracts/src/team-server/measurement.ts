@@ -1,5 +1,6 @@
 /** Measured spectra attached to a version, and the simulated-vs-measured comparison. */
 import { z } from 'zod';
+import { singleLineText } from '../plain-text.js';
 
 export const measurementFormatSchema = z.enum(['csv', 'touchstone']);
 
@@ -7,7 +8,7 @@ export const measurementFormatSchema = z.enum(['csv', 'touchstone']);
 export const measurementUploadFieldsSchema = z.object({
   from: z.string().min(1).max(80),
   to: z.string().min(1).max(80),
-  label: z.string().trim().max(200).default(''),
+  label: singleLineText(0, 200).default(''),
 });
 export type MeasurementUploadFields = z.infer<typeof measurementUploadFieldsSchema>;
 

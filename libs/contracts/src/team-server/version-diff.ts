@@ -1,6 +1,7 @@
 /** The diff between two versions of a configuration: gates, circuits, specs and figures. */
 import { z } from 'zod';
 import { gateSettingSchema } from '../mesh/configuration.js';
+import { versionNumberParamSchema } from './version-number.js';
 
 export const gateChangeSchema = z.object({
   gate: z.string(),
@@ -31,5 +32,5 @@ export const versionDiffSchema = z.object({
 export type VersionDiff = z.infer<typeof versionDiffSchema>;
 
 /** GET .../diff query. */
-export const diffQuerySchema = z.object({ from: z.coerce.number().int().positive(), to: z.coerce.number().int().positive() });
+export const diffQuerySchema = z.object({ from: versionNumberParamSchema, to: versionNumberParamSchema });
 export type DiffQuery = z.infer<typeof diffQuerySchema>;
