@@ -6,7 +6,8 @@ export default defineConfig({
   plugins: [react()],
   server: {
     port: 5173,
-    proxy: { '/api': { target: 'http://localhost:3000', changeOrigin: false } },
+    // The API refuses writes from another origin; the dev server forwards them as the API's own origin.
+    proxy: { '/api': { target: 'http://localhost:3000', changeOrigin: false, headers: { origin: 'http://localhost:3000' } } },
   },
   preview: { port: 4173 },
   build: {

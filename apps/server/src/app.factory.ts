@@ -8,6 +8,7 @@ import { AppModule } from './app.module.js';
 import { ApiExceptionFilter } from './common/api-exception.filter.js';
 import type { HexloomOptions } from './common/hexloom-options.js';
 import { resolveOptions } from './common/resolve-options.js';
+import { sameOriginOnly } from './common/same-origin.middleware.js';
 import { setupOpenApi } from './common/setup-open-api.js';
 import { openDatabase } from './db/migrate.js';
 import { seedDemo } from './db/seed.js';
@@ -49,6 +50,7 @@ export async function createHexloomApp(options: CreateHexloomAppOptions): Promis
         },
       }),
     );
+    app.use(sameOriginOnly(resolved.publicUrl));
     app.use(cookieParser(resolved.sessionSecret));
     setupOpenApi(app);
     if (resolved.webDistDir && !serveWebApp(app, resolved.webDistDir)) {
