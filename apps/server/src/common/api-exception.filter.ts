@@ -13,6 +13,7 @@ const STATUS_OF_KIND: Record<DomainErrorKind, number> = {
   unprocessable: HttpStatus.UNPROCESSABLE_ENTITY,
   too_large: HttpStatus.PAYLOAD_TOO_LARGE,
   unsupported: HttpStatus.UNSUPPORTED_MEDIA_TYPE,
+  too_many: HttpStatus.TOO_MANY_REQUESTS,
 };
 
 /** Typed errors of the computing libraries (stable names); their message names the bad value, so they are 422s. */
@@ -27,6 +28,7 @@ const REASON: Record<number, string> = {
   413: 'Payload Too Large',
   415: 'Unsupported Media Type',
   422: 'Unprocessable Entity',
+  429: 'Too Many Requests',
   500: 'Internal Server Error',
 };
 

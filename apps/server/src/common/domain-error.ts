@@ -1,7 +1,7 @@
 /** Base class of domain errors; the one exception filter maps their kind to an HTTP status. */
 
 /** What went wrong, independent of HTTP. */
-export type DomainErrorKind = 'invalid' | 'conflict' | 'unauthorized' | 'forbidden' | 'not_found' | 'unprocessable' | 'too_large' | 'unsupported';
+export type DomainErrorKind = 'invalid' | 'conflict' | 'unauthorized' | 'forbidden' | 'not_found' | 'unprocessable' | 'too_large' | 'unsupported' | 'too_many';
 
 /** One offending field of a rejected input. */
 export type DomainIssue = { path: string; message: string };

@@ -18,3 +18,12 @@ export class NothingToRerouteError extends DomainError {
     super(`Cannot re-route circuit "${circuitId}": ${reason}`);
   }
 }
+
+/** More running yield jobs, or open event streams, than a team or a user may have at once. */
+export class TooManyJobsError extends DomainError {
+  override readonly name = 'TooManyJobsError';
+  readonly kind = 'too_many';
+  constructor(message: string) {
+    super(message);
+  }
+}

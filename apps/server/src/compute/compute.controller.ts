@@ -6,7 +6,7 @@ import {
   type RerouteCircuitBody, rerouteCircuitBodySchema, type SimulateBody, simulateBodySchema, spectrumFileSchema, type StartYieldJob, startYieldJobSchema,
   type SynthesiseBody, synthesiseBodySchema, type User, type YieldJob, yieldJobSchema, versionNumberParamSchema } from '@hexloom/contracts';
 import type { Response } from 'express';
-import { from, interval, map, type Observable, startWith, switchMap, takeWhile } from 'rxjs';
+import { map, type Observable } from 'rxjs';
 import { z } from 'zod';
 import { CurrentUser } from '../common/current-user.decorator.js';
 import { openApiSchema } from '../common/openapi-schema.js';
@@ -129,17 +129,13 @@ export class ComputeController {
 
   @Sse('yield-jobs/:jobId/events')
   @TeamRoles('owner', 'designer', 'reviewer', 'viewer')
-  @ApiOperation({ summary: 'Server-sent `progress` events of a yield job (the job JSON) until it is done, cancelled or failed (any member)' })
+  @ApiOperation({ summary: 'Server-sent `progress` events of a yield job (the job JSON), pushed as it makes progress, until it is done, cancelled, failed or interrupted; at most 4 open streams per user (any member)' })
   @ApiParam({ name: 'jobId', format: 'uuid' })
   @ApiProduces('text/event-stream')
   @ApiOkResponse({ description: 'text/event-stream of `progress` events whose data is the job', schema: openApiSchema(yieldJobSchema) })
-  events(@Param(new ZodValidationPipe(jobParams)) p: JobParams): Observable<MessageEvent> {
-    return interval(250).pipe(
-      startWith(0),
-      switchMap(() => from(this.jobs.get(p.teamId, p.configurationId, p.number, p.jobId))),
-      takeWhile((job) => job.status === 'running', true),
-      map((job): MessageEvent => ({ type: 'progress', data: job })),
-    );
+  async events(@CurrentUser() user: User, @Param(new ZodValidationPipe(jobParams)) p: JobParams): Promise<Observable<MessageEvent>> {
+    const updates = await this.jobs.follow(user.id, p.teamId, p.configurationId, p.number, p.jobId);
+    return updates.pipe(map((job): MessageEvent => ({ type: 'progress', data: job })));
   }
 
   @Delete('yield-jobs/:jobId')

@@ -1,15 +1,17 @@
 /** Monte Carlo yield jobs: chunks run in a piscina worker pool, progress in the database, cancel by abort. */
-import { Inject, Injectable, Logger, NotFoundException, type OnApplicationShutdown } from '@nestjs/common';
+import { Inject, Injectable, Logger, NotFoundException, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
 import type { StartYieldJob, User, YieldJob } from '@hexloom/contracts';
 import { planMonteCarlo, summariseMonteCarlo, type MonteCarloRun } from '@hexloom/synth';
 import { and, eq } from 'drizzle-orm';
 import { Piscina } from 'piscina';
+import { concat, finalize, type Observable, of, Subject, takeWhile } from 'rxjs';
 import { AuditService } from '../audit/audit.service.js';
 import { buildChipMesh } from '../chips/chips.service.js';
 import { ConfigurationsService, type VersionRef } from '../configurations/configurations.service.js';
 import { DATABASE, type Database } from '../db/database.js';
 import { loginMap } from '../db/login-map.js';
 import { yieldJobs, type YieldJobRow } from '../db/schema/index.js';
+import { TooManyJobsError } from './compute-errors.js';
 import { resolvePort } from './resolve-port.js';
 import { SimulationService } from './simulation.service.js';
 import type { YieldChunkTask } from './yield-chunk.worker.js';
@@ -18,15 +20,33 @@ import type { YieldChunkTask } from './yield-chunk.worker.js';
 const CHUNKS_PER_JOB = 20;
 const THREADS = 2;
 
+/** Yield jobs a team may have running at once (others wait their turn: the answer is a 429). */
+export const MAX_RUNNING_JOBS_PER_TEAM = 2;
+/** Event streams one user may hold open at once. */
+export const MAX_STREAMS_PER_USER = 4;
+
 /** The worker file next to this module (.ts under the test runner, .js when built); tsx loads either. */
 const WORKER_FILE = new URL(`./yield-chunk.worker${import.meta.url.endsWith('.ts') ? '.ts' : '.js'}`, import.meta.url).href;
 
 /** Yield job operations. */
 @Injectable()
-export class YieldJobsService implements OnApplicationShutdown {
+export class YieldJobsService implements OnApplicationBootstrap, OnApplicationShutdown {
   private readonly logger = new Logger('YieldJobsService');
   private pool: Piscina | null = null;
-  private readonly running = new Map<string, AbortController>();
+  private readonly running = new Map<string, { abort: AbortController; teamId: string }>();
+  /** Updates of each running job, pushed to its event streams as they happen (no stream polls the database). */
+  private readonly updates = new Map<string, Subject<YieldJob>>();
+  private readonly streams = new Map<string, number>();
+
+  /** A job that was running when the server stopped will never finish: it is marked interrupted at start-up. */
+  async onApplicationBootstrap(): Promise<void> {
+    const stale = await this.db
+      .update(yieldJobs)
+      .set({ status: 'interrupted', error: 'the server stopped while this job ran; start it again' })
+      .where(eq(yieldJobs.status, 'running'))
+      .returning({ id: yieldJobs.id });
+    if (stale.length > 0) this.logger.warn(`${stale.length} yield job(s) left running by the last server were marked interrupted`);
+  }
 
   constructor(
     @Inject(DATABASE) private readonly db: Database,
@@ -38,6 +58,8 @@ export class YieldJobsService implements OnApplicationShutdown {
   /** Starts a study of one version and returns at once; the chunks run in worker threads. */
   async start(actor: User, teamId: string, configurationId: string, number: number, body: StartYieldJob): Promise<YieldJob> {
     const ref = await this.configurations.findVersionOrFail(teamId, configurationId, number);
+    const mine = [...this.running.values()].filter((r) => r.teamId === teamId).length;
+    if (mine >= MAX_RUNNING_JOBS_PER_TEAM) throw new TooManyJobsError(`the team already has ${mine} yield jobs running (at most ${MAX_RUNNING_JOBS_PER_TEAM}); wait for one to finish or cancel one`);
     const mesh = buildChipMesh(ref.version.content.mesh);
     const from = resolvePort(mesh, body.from, 'from');
     const to = resolvePort(mesh, body.to, 'to');
@@ -53,7 +75,8 @@ export class YieldJobsService implements OnApplicationShutdown {
       return inserted;
     });
     const abort = new AbortController();
-    this.running.set(row.id, abort);
+    this.running.set(row.id, { abort, teamId });
+    this.updates.set(row.id, new Subject<YieldJob>());
     const base = { configuration: ref.version.content, from, to, offsetsHz, mask: body.mask.regions, tolerance: { couplerSigmaRad: body.couplerSigmaRad, phaseSigmaRad: body.phaseSigmaRad } };
     void this.run(row.id, chunks.map((chunk) => ({ ...base, chunk })), abort.signal);
     return (await this.toJobs([row]))[0] as YieldJob;
@@ -70,17 +93,47 @@ export class YieldJobsService implements OnApplicationShutdown {
     const ref = await this.configurations.findVersionOrFail(teamId, configurationId, number);
     const row = await this.rowOrFail(ref, jobId);
     if (row.status === 'running') {
-      this.running.get(jobId)?.abort();
+      this.running.get(jobId)?.abort.abort();
       await this.db.transaction(async (tx) => {
         await tx.update(yieldJobs).set({ status: 'cancelled' }).where(and(eq(yieldJobs.id, jobId), eq(yieldJobs.status, 'running')));
         await this.audit.record({ action: 'yield_job.cancelled', teamId, actorId: actor.id, target: `${ref.configuration.name} v${number}`, detail: { jobId } }, tx);
       });
+      await this.publish(jobId, true);
     }
     return this.get(teamId, configurationId, number, jobId);
   }
 
+  /**
+   * The job now, then each update as the job makes it, until it ends (a job that is not running gives one event).
+   * @throws TooManyJobsError when the user already holds `MAX_STREAMS_PER_USER` streams open.
+   */
+  async follow(userId: string, teamId: string, configurationId: string, number: number, jobId: string): Promise<Observable<YieldJob>> {
+    const now = await this.get(teamId, configurationId, number, jobId);
+    const open = this.streams.get(userId) ?? 0;
+    if (open >= MAX_STREAMS_PER_USER) throw new TooManyJobsError(`you already follow ${open} yield job streams (at most ${MAX_STREAMS_PER_USER}); close one first`);
+    const live = this.updates.get(jobId);
+    if (now.status !== 'running' || !live) return of(now);
+    this.streams.set(userId, open + 1);
+    return concat(of(now), live.asObservable()).pipe(
+      takeWhile((job) => job.status === 'running', true),
+      finalize(() => this.streams.set(userId, Math.max(0, (this.streams.get(userId) ?? 1) - 1))),
+    );
+  }
+
+  /** Reads the job and pushes it to its streams; `last` ends them. */
+  private async publish(jobId: string, last = false): Promise<void> {
+    const subject = this.updates.get(jobId);
+    if (!subject) return;
+    const [row] = await this.db.select().from(yieldJobs).where(eq(yieldJobs.id, jobId));
+    if (row) subject.next((await this.toJobs([row]))[0] as YieldJob);
+    if (last) {
+      subject.complete();
+      this.updates.delete(jobId);
+    }
+  }
+
   async onApplicationShutdown(): Promise<void> {
-    for (const abort of this.running.values()) abort.abort();
+    for (const r of this.running.values()) r.abort.abort();
     this.running.clear();
     await this.pool?.destroy();
     this.pool = null;
@@ -97,6 +150,7 @@ export class YieldJobsService implements OnApplicationShutdown {
         for (const r of results) runs.push(...r);
         if (signal.aborted) break;
         await this.db.update(yieldJobs).set({ runsDone: runs.length }).where(and(eq(yieldJobs.id, jobId), eq(yieldJobs.status, 'running')));
+        await this.publish(jobId);
       }
       if (!signal.aborted) {
         await this.db.update(yieldJobs).set({ status: 'done', runsDone: runs.length, summary: summariseMonteCarlo(runs) }).where(and(eq(yieldJobs.id, jobId), eq(yieldJobs.status, 'running')));
@@ -113,6 +167,7 @@ export class YieldJobsService implements OnApplicationShutdown {
       }
     } finally {
       this.running.delete(jobId);
+      await this.publish(jobId, true).catch(() => undefined);
     }
   }
 

@@ -18,7 +18,8 @@ export const startYieldJobSchema = z.object({
 });
 export type StartYieldJob = z.infer<typeof startYieldJobSchema>;
 
-export const yieldJobStatusSchema = z.enum(['running', 'done', 'cancelled', 'failed']);
+/** `interrupted`: the server stopped while the job ran (start it again). */
+export const yieldJobStatusSchema = z.enum(['running', 'done', 'cancelled', 'failed', 'interrupted']);
 export type YieldJobStatus = z.infer<typeof yieldJobStatusSchema>;
 
 const spreadSchema = z.object({ mean: z.number(), std: z.number(), min: z.number(), p05: z.number(), p50: z.number(), p95: z.number(), max: z.number() });

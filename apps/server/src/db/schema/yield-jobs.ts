@@ -24,7 +24,7 @@ export const yieldJobs = pgTable(
       .references(() => users.id),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [check('yield_jobs_status_check', sql`${t.status} in ('running', 'done', 'cancelled', 'failed')`)],
+  (t) => [check('yield_jobs_status_check', sql`${t.status} in ('running', 'done', 'cancelled', 'failed', 'interrupted')`)],
 );
 
 export type YieldJobRow = typeof yieldJobs.$inferSelect;

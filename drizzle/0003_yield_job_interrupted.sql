@@ -1,0 +1,2 @@
+ALTER TABLE "yield_jobs" DROP CONSTRAINT "yield_jobs_status_check";--> statement-breakpoint
+ALTER TABLE "yield_jobs" ADD CONSTRAINT "yield_jobs_status_check" CHECK ("yield_jobs"."status" in ('running', 'done', 'cancelled', 'failed', 'interrupted'));
