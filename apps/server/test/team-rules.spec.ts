@@ -63,12 +63,18 @@ describe('team rules', () => {
       expect(await auditCount(sut)).toBe(before);
     });
 
-    it('adds the invitee to the team with the invited role on their first sign-in with that e-mail', async () => {
+    it('adds the invitee to the team with the invited role when they sign in through the link of the invitation mail', async () => {
       const created = invitationSchema.parse(
         (await ilse.post(`/api/teams/${teamId}/invitations`).send({ email: 'Pia@Studio.example', role: 'reviewer' }).expect(201)).body,
       );
       expect(created).toMatchObject({ email: 'pia@studio.example', role: 'reviewer', invitedBy: 'ilse', acceptedAt: null });
-      const { agent: pia } = await signIn(sut, { login: 'pia', name: 'Pia Lund', email: 'pia@studio.example' });
+      // Typing the invited address on the local sign-in is not enough: anyone could type it.
+      const { agent: impostor } = await signIn(sut, { login: 'not-pia', email: 'pia@studio.example' });
+      expect(meSchema.parse((await impostor.get('/api/me').expect(200)).body).teams).toEqual([]);
+      const mails = (await ilse.get(`/api/teams/${teamId}/outbox`).expect(200)).body as { to: string[]; text: string }[];
+      const link = mails.find((m) => m.to.includes('pia@studio.example'))?.text.match(/\/api\/auth\/login\?invitation=([A-Za-z0-9_-]+)/)?.[1];
+      expect(link).toBeDefined();
+      const { agent: pia } = await signIn(sut, { login: 'pia', name: 'Pia Lund', email: 'pia@studio.example' }, '/', link);
       const me = meSchema.parse((await pia.get('/api/me').expect(200)).body);
       expect(me.teams).toEqual([expect.objectContaining({ id: teamId, slug: 'kestrel-vale', role: 'reviewer' })]);
       const listed = z.array(invitationSchema).parse((await ilse.get(`/api/teams/${teamId}/invitations`).expect(200)).body);

@@ -34,10 +34,11 @@ export class AuthController {
   @Get('login')
   @ApiOperation({ summary: "302 to the provider's authorize page (full-page navigation)" })
   @ApiQuery({ name: 'returnTo', required: false, description: 'Path on this site to return to, default /' })
+  @ApiQuery({ name: 'invitation', required: false, description: 'Token of the invitation link the sign-in accepts' })
   @ApiFoundResponse({ description: 'Redirect to the identity provider' })
   login(@Query(new ZodValidationPipe(loginQuerySchema)) query: LoginQuery, @Res() res: Response): void {
     const state = this.auth.newState();
-    const cookie: OAuthStateCookie = { state, returnTo: query.returnTo ?? '/' };
+    const cookie: OAuthStateCookie = { state, returnTo: query.returnTo ?? '/', ...(query.invitation ? { invitation: query.invitation } : {}) };
     res.cookie(OAUTH_STATE_COOKIE, cookie, oauthStateCookieOptions(this.options.cookieSecure));
     res.redirect(302, this.auth.authorizeUrl(state));
   }
@@ -51,7 +52,7 @@ export class AuthController {
   @ApiBadRequestResponse({ description: 'State mismatch, or a bad, reused or expired code' })
   async callback(@Req() req: AuthedRequest, @Res() res: Response): Promise<void> {
     const user = req.user as User;
-    const token = await this.auth.completeSignIn(user);
+    const token = await this.auth.completeSignIn(user, req.oauthInvitation);
     res.clearCookie(OAUTH_STATE_COOKIE, clearingOptions(oauthStateCookieOptions(this.options.cookieSecure)));
     res.cookie(SESSION_COOKIE, token, sessionCookieOptions(this.options.cookieSecure));
     res.redirect(302, req.oauthReturnTo ?? '/');

@@ -8,12 +8,15 @@ export const returnToSchema = z
   .regex(/^\/(?![/\\])[^\\]*$/, 'a path on this site starting with a single "/"');
 
 /** GET /api/auth/login query. */
-export const loginQuerySchema = z.object({ returnTo: returnToSchema.optional() });
+/** The invitation token of an invitation link (base64url). */
+const invitationTokenSchema = z.string().regex(/^[A-Za-z0-9_-]{16,64}$/, 'an invitation token');
+
+export const loginQuerySchema = z.object({ returnTo: returnToSchema.optional(), invitation: invitationTokenSchema.optional() });
 export type LoginQuery = z.infer<typeof loginQuerySchema>;
 
 /** GET /api/auth/callback query. */
 export const callbackQuerySchema = z.object({ code: z.string().min(1).max(500), state: z.string().min(1).max(200) });
 
 /** What the state cookie holds. */
-export const oauthStateCookieSchema = z.object({ state: z.string().min(1), returnTo: returnToSchema });
+export const oauthStateCookieSchema = z.object({ state: z.string().min(1), returnTo: returnToSchema, invitation: invitationTokenSchema.optional() });
 export type OAuthStateCookie = z.infer<typeof oauthStateCookieSchema>;

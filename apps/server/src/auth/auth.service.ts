@@ -66,10 +66,14 @@ export class AuthService {
     return { id: row.id, login: row.login, name: row.name, email: row.email, avatarUrl: row.avatarUrl };
   }
 
-  /** Accepts pending invitations for the user's e-mail, opens a session, audits; returns the raw token. */
-  async completeSignIn(user: User): Promise<string> {
+  /**
+   * Accepts the invitation of the link the sign-in started from (any account may), and, with the code-host sign-in
+   * only, the pending invitations of the user's e-mail (the local sign-in lets anyone type any address); opens a
+   * session, audits; returns the raw token.
+   */
+  async completeSignIn(user: User, invitationToken?: string): Promise<string> {
     return this.db.transaction(async (tx) => {
-      const accepted = await this.invitations.acceptPendingFor(user, tx);
+      const accepted = (invitationToken ? await this.invitations.acceptByToken(user, invitationToken, tx) : 0) + (this.options.github ? await this.invitations.acceptPendingFor(user, tx) : 0);
       const { token } = await this.sessions.create(user.id, tx);
       await this.audit.record(
         { action: 'auth.signed_in', teamId: null, actorId: user.id, target: user.login, detail: { provider: this.providerKind(), acceptedInvitations: accepted } },

@@ -23,6 +23,7 @@ export class OAuthStateGuard implements CanActivate {
     if (!cookie.success) throw new OAuthStateMismatchError('missing-cookie');
     if (!sameText(cookie.data.state, query.state)) throw new OAuthStateMismatchError('mismatch');
     req.oauthReturnTo = cookie.data.returnTo;
+    if (cookie.data.invitation) req.oauthInvitation = cookie.data.invitation;
     return true;
   }
 }

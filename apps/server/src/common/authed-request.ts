@@ -11,4 +11,6 @@ export type AuthedRequest = Omit<Request, 'user'> & {
   sessionId?: string;
   teamAccess?: TeamAccess;
   oauthReturnTo?: string;
+  /** The invitation token the sign-in started from (an invitation link). */
+  oauthInvitation?: string;
 };

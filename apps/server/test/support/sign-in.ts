@@ -28,8 +28,8 @@ export function hiddenFields(html: string): Record<'client_id' | 'redirect_uri' 
  * Runs login -> authorize page -> POST authorize, stopping before the callback.
  * Returns the callback path (with code and state) the provider redirected to.
  */
-export async function startSignIn(agent: Agent, choice: AccountChoice, returnTo = '/'): Promise<string> {
-  const login = await agent.get('/api/auth/login').query({ returnTo }).expect(302);
+export async function startSignIn(agent: Agent, choice: AccountChoice, returnTo = '/', invitation?: string): Promise<string> {
+  const login = await agent.get('/api/auth/login').query({ returnTo, ...(invitation ? { invitation } : {}) }).expect(302);
   const page = await agent.get(pathOf(String(login.headers['location']))).expect(200);
   const fields = hiddenFields(page.text);
   const posted = await agent
@@ -41,9 +41,9 @@ export async function startSignIn(agent: Agent, choice: AccountChoice, returnTo 
 }
 
 /** Signs `choice` in through the whole flow; returns the signed-in agent and where the callback sent it. */
-export async function signIn(app: INestApplication, choice: AccountChoice, returnTo = '/'): Promise<{ agent: Agent; landedOn: string }> {
+export async function signIn(app: INestApplication, choice: AccountChoice, returnTo = '/', invitation?: string): Promise<{ agent: Agent; landedOn: string }> {
   const agent = request.agent(app.getHttpServer());
-  const callback = await startSignIn(agent, choice, returnTo);
+  const callback = await startSignIn(agent, choice, returnTo, invitation);
   const done = await agent.get(callback).expect(302);
   return { agent, landedOn: String(done.headers['location']) };
 }

@@ -20,6 +20,8 @@ export const invitations = pgTable(
       .references(() => users.id),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     acceptedAt: timestamp('accepted_at', { withTimezone: true }),
+    /** SHA-256 of the token of the invitation link (the token itself is only in the mail). */
+    tokenHash: text('token_hash').unique(),
   },
   (t) => [
     index('invitations_email_idx').on(t.email),
