@@ -5,6 +5,7 @@ import { AuthModule } from './auth/auth.module.js';
 import { BenchModule } from './bench/bench.module.js';
 import { ChipsModule } from './chips/chips.module.js';
 import { HEXLOOM_OPTIONS, type ResolvedOptions } from './common/hexloom-options.js';
+import { RateLimitModule } from './common/rate-limit.module.js';
 import { ComputeModule } from './compute/compute.module.js';
 import { ConfigurationsModule } from './configurations/configurations.module.js';
 import { DatabaseModule } from './db/database.module.js';
@@ -40,6 +41,7 @@ export class AppModule {
       module: AppModule,
       imports: [
         OptionsModule.forRoot(options),
+        RateLimitModule.forRoot(options),
         DatabaseModule.forRoot(database),
         AuthModule.forRoot(options),
         HealthModule,

@@ -149,7 +149,7 @@ describe('readTouchstone', () => {
 
 describe('writeTouchstone comments', () => {
   it('keeps a comment with a newline on one line, so it cannot add an option line (Touchstone 1.1: one option line)', () => {
-    const text = writeTouchstone({ portCount: 1, frequenciesHz: [1e9, 2e9], re: Float64Array.of(1, 1), im: Float64Array.of(0, 0), referenceOhm: 50 }, { format: 'RI', comments: ['chip "x"\n# HZ S DB R 1'] });
+    const text = writeTouchstone({ portCount: 1, frequenciesHz: Float64Array.of(1e9, 2e9), re: Float64Array.of(1, 1), im: Float64Array.of(0, 0), referenceOhm: 50 }, { format: 'RI', comments: ['chip "x"\n# HZ S DB R 1'] });
     expect(text.split('\n').filter((l) => l.startsWith('#'))).toEqual(['# GHZ S RI R 50']);
     expect(readTouchstone(text, { fileName: 'x.s1p' }).format).toBe('RI');
   });

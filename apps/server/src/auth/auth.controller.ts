@@ -1,4 +1,6 @@
 /** /api/auth routes: provider kind, login redirect, OAuth callback, logout. */
+import { SkipThrottle } from '@nestjs/throttler';
+import { COMPUTE_THROTTLER, UserOrAddressThrottlerGuard } from '../common/rate-limit.js';
 import { Controller, Get, HttpCode, Inject, Post, Query, Req, Res, UseGuards } from '@nestjs/common';
 import { ApiBadRequestResponse, ApiFoundResponse, ApiNoContentResponse, ApiOkResponse, ApiOperation, ApiQuery, ApiTags } from '@nestjs/swagger';
 import { type AuthProviders, authProvidersSchema, type User } from '@hexloom/contracts';
@@ -17,6 +19,8 @@ import { clearingOptions, OAUTH_STATE_COOKIE, oauthStateCookieOptions, SESSION_C
 /** Public sign-in routes; the session cookie is set only by the callback. */
 @ApiTags('auth')
 @Public()
+@UseGuards(UserOrAddressThrottlerGuard)
+@SkipThrottle({ [COMPUTE_THROTTLER]: true })
 @Controller('auth')
 export class AuthController {
   constructor(

@@ -26,6 +26,8 @@ export type HexloomOptions = {
   mailFrom?: string;
   /** Address the server listens on (default `127.0.0.1`: this machine only). */
   host?: string;
+  /** Requests per minute of the sign-in routes (per address) and of the compute routes (per user). */
+  rateLimits?: { signInPerMinute: number; computePerMinute: number };
   /**
    * The built-in local sign-in (anyone who reaches it picks an account). `true` turns it on anywhere; absent, it is
    * on only without code-host credentials, listening on a loopback address, with an http loopback public URL.
@@ -46,6 +48,7 @@ export type ResolvedOptions = {
   smtpUrl: string | null;
   mailFrom: string;
   host: string;
+  rateLimits: { signInPerMinute: number; computePerMinute: number };
   /** Whether sign-in goes through the built-in local identity provider (never with code-host credentials). */
   localIdp: boolean;
 };

@@ -1,6 +1,7 @@
 /** Applies defaults to createHexloomApp options. */
 import { randomBytes } from 'node:crypto';
 import type { HexloomOptions, ResolvedOptions } from './hexloom-options.js';
+import { DEFAULT_RATE_LIMITS } from './rate-limit.js';
 
 /** Thrown for options that cannot work; the message names the bad value. */
 export class InvalidOptionsError extends Error {
@@ -38,6 +39,7 @@ export function resolveOptions(options: HexloomOptions): ResolvedOptions {
   return {
     host,
     localIdp,
+    rateLimits: options.rateLimits ?? DEFAULT_RATE_LIMITS,
     dataDir: options.dataDir,
     seedDemo: options.seedDemo,
     seedDemoDesigns: options.seedDemo && (options.seedDemoDesigns ?? true),

@@ -1,5 +1,7 @@
 /** Compute routes of one version: simulate (cached), mask check, synthesise, circuits, Monte Carlo yield jobs. */
-import { Body, Controller, Delete, Get, HttpCode, Param, Post, Res, Sse, type MessageEvent } from '@nestjs/common';
+import { SkipThrottle } from '@nestjs/throttler';
+import { SIGN_IN_THROTTLER, UserOrAddressThrottlerGuard } from '../common/rate-limit.js';
+import { Body, Controller, Delete, Get, HttpCode, Param, Post, Res, Sse, type MessageEvent, UseGuards } from '@nestjs/common';
 import { ApiAcceptedResponse, ApiBody, ApiOkResponse, ApiOperation, ApiParam, ApiProduces, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import {
   type MaskCheckAnswer, maskCheckAnswerSchema, type MaskCheckBody, maskCheckBodySchema, type PlaceCircuitBody, placeCircuitBodySchema, type Proposal, proposalSchema,
@@ -28,6 +30,8 @@ type JobParams = z.output<typeof jobParams>;
 @ApiParam({ name: 'teamId', format: 'uuid' })
 @ApiParam({ name: 'configurationId', format: 'uuid' })
 @ApiParam({ name: 'number', schema: { type: 'integer', minimum: 1 } })
+@UseGuards(UserOrAddressThrottlerGuard)
+@SkipThrottle({ [SIGN_IN_THROTTLER]: true })
 @Controller('teams/:teamId/configurations/:configurationId/versions/:number')
 export class ComputeController {
   constructor(

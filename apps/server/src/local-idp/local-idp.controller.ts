@@ -1,5 +1,7 @@
 /** HTTP endpoints of the fake identity provider, shaped like a code host's OAuth web flow. */
-import { Body, Controller, Get, Header, Headers, HttpCode, Post, Query, Redirect, UnauthorizedException } from '@nestjs/common';
+import { SkipThrottle } from '@nestjs/throttler';
+import { COMPUTE_THROTTLER, UserOrAddressThrottlerGuard } from '../common/rate-limit.js';
+import { Body, Controller, Get, Header, Headers, HttpCode, Post, Query, Redirect, UnauthorizedException, UseGuards } from '@nestjs/common';
 import { ApiBody, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
 import { z } from 'zod';
 import { openApiSchema } from '../common/openapi-schema.js';
@@ -29,6 +31,8 @@ const profileSchema = z.object({
 /** Used only when no GitHub credentials are configured. */
 @ApiTags('local identity provider')
 @Public()
+@UseGuards(UserOrAddressThrottlerGuard)
+@SkipThrottle({ [COMPUTE_THROTTLER]: true })
 @Controller('local-idp')
 export class LocalIdpController {
   constructor(private readonly idp: LocalIdpService) {}
