@@ -15,6 +15,9 @@ import { seedDemo } from './db/seed.js';
 import { seedDemoDesigns } from './db/seed-demo-designs.js';
 import { serveWebApp } from './web/serve-web-app.js';
 
+/** Largest JSON request body, bytes (larger ones are a 413). */
+export const MAX_JSON_BODY_BYTES = 4 * 1024 * 1024;
+
 /** Options of createHexloomApp; `logLevels` defaults to errors and warnings only. */
 export type CreateHexloomAppOptions = HexloomOptions & { logLevels?: LogLevel[] };
 
@@ -31,8 +34,12 @@ export async function createHexloomApp(options: CreateHexloomAppOptions): Promis
     const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(resolved, database), {
       logger: options.logLevels ?? ['error', 'warn'],
       abortOnError: false,
+      bodyParser: false,
     });
     app.setGlobalPrefix('api');
+    // A configuration embeds its chip: allow bodies up to 4 MiB (a 60 x 60 chip's configuration is well under that).
+    app.useBodyParser('json', { limit: MAX_JSON_BODY_BYTES });
+    app.useBodyParser('urlencoded', { limit: '64kb', extended: false });
     app.useGlobalFilters(new ApiExceptionFilter());
     app.disable('x-powered-by');
     app.use(

@@ -58,3 +58,38 @@ describe('inputs that used to break the server', () => {
     expect((await noor.patch(`/api/teams/${teamId}/chips/${chip.id}`).send({ name: 'chip\r\nx' })).status).toBe(400);
   });
 });
+
+describe('hard limits', () => {
+  let sut: INestApplication;
+  let noor: Agent;
+  let teamId = '';
+  beforeAll(async () => {
+    sut = await startTestApp();
+    noor = (await signIn(sut, { login: 'noor' })).agent;
+    teamId = await demoTeamId(sut);
+  });
+  afterAll(async () => {
+    await sut.close();
+  });
+
+  it('refuses a chip larger than the server takes with a 422 naming the size', async () => {
+    const small = (await createChip(noor, teamId, 'size source', 1, 1)).definition;
+    const res = await noor.post(`/api/teams/${teamId}/chips`).send({ definition: { ...small, name: 'huge', shape: { kind: 'rectangle', rows: 100, columns: 100 } } });
+    expect(res.status).toBe(422);
+    expect(res.body.message).toMatch(/10000 cells; the team server takes chips of at most 3600 cells/);
+  });
+
+  it('refuses a JSON body above 4 MiB with a 413', async () => {
+    const res = await noor.post(`/api/teams/${teamId}/invitations`).set('content-type', 'application/json').send(JSON.stringify({ email: 'a@b.example', role: 'viewer', pad: 'x'.repeat(5 * 1024 * 1024) }));
+    expect(res.status).toBe(413);
+  });
+
+  it('refuses JSON nested deeper than 64 levels with a 400', async () => {
+    let deep: unknown = 'x';
+    for (let i = 0; i < 100; i++) deep = { a: deep };
+    const ilse = (await signIn(sut, { login: 'ilse' })).agent;
+    const res = await ilse.post(`/api/teams/${teamId}/invitations`).send({ email: 'deep@b.example', role: 'viewer', extra: deep });
+    expect(res.status).toBe(400);
+    expect(res.body.issues[0].message).toMatch(/nested deeper than 64 levels/);
+  });
+});
