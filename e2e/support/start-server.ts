@@ -8,7 +8,10 @@ import { fileURLToPath } from 'node:url';
 
 export const REPO_ROOT = fileURLToPath(new URL('../../', import.meta.url));
 
-export type RunningServer = { url: string; dataDir: string; logs: () => string; stop: () => Promise<void> };
+export type RunningServer = { url: string; dataDir: string; logs: () => string; stop: () => Promise<void>; kill: () => Promise<void> };
+
+/** Where to keep the data (a fresh folder by default, removed on stop) and whether to keep it after `stop`/`kill`. */
+export type StartOptions = { dataDir?: string; env?: Record<string, string> };
 
 /** Asks the OS for a free TCP port on the loopback interface. */
 export async function freePort(): Promise<number> {
@@ -24,12 +27,13 @@ export async function freePort(): Promise<number> {
 }
 
 /** Spawns `npm run serve -w apps/server` exactly as the README's start command does, and waits for its URL line. */
-export async function startServer(): Promise<RunningServer> {
+export async function startServer(options: StartOptions = {}): Promise<RunningServer> {
   const port = await freePort();
-  const dataDir = mkdtempSync(join(tmpdir(), 'hexloom-e2e-'));
+  const own = options.dataDir === undefined;
+  const dataDir = options.dataDir ?? mkdtempSync(join(tmpdir(), 'hexloom-e2e-'));
   const child: ChildProcess = spawn('npm', ['run', 'serve', '-w', 'apps/server'], {
     cwd: REPO_ROOT,
-    env: { ...process.env, PORT: String(port), HEXLOOM_DATA_DIR: dataDir, PUBLIC_URL: `http://127.0.0.1:${port}` },
+    env: { ...process.env, PORT: String(port), HEXLOOM_DATA_DIR: dataDir, PUBLIC_URL: `http://127.0.0.1:${port}`, ...options.env },
     stdio: ['ignore', 'pipe', 'pipe'],
     detached: true,
   });
@@ -61,7 +65,15 @@ export async function startServer(): Promise<RunningServer> {
         process.kill(-child.pid, 'SIGTERM');
         await exited;
       }
-      rmSync(dataDir, { recursive: true, force: true });
+      if (own) rmSync(dataDir, { recursive: true, force: true });
+    },
+    /** SIGKILL to the whole process group: no shutdown hook runs, as when a machine loses power. */
+    kill: async () => {
+      if (child.exitCode === null && child.signalCode === null && child.pid) {
+        const exited = new Promise((resolve) => child.once('exit', resolve));
+        process.kill(-child.pid, 'SIGKILL');
+        await exited;
+      }
     },
   };
 }

@@ -46,3 +46,22 @@ describe('cross-site requests', () => {
     expect((await noor.get(`/api/teams/${teamId}/chips`).set('Origin', EVIL)).status).toBe(200);
   });
 });
+
+describe('cross-site requests with an opaque origin', () => {
+  let sut: INestApplication;
+  beforeAll(async () => {
+    sut = await startTestApp();
+  });
+  afterAll(async () => {
+    await sut.close();
+  });
+  it('takes a form post with Origin: null only when Fetch Metadata says it came from this site', async () => {
+    const { agent } = await signIn(sut, { login: 'noor' });
+    const teamId = await demoTeamId(sut);
+    const chip = await createChip(agent, teamId, 'null origin chip', 2, 3);
+    const path = `/api/teams/${teamId}/chips/${chip.id}/configurations`;
+    expect((await agent.post(path).set('Origin', 'null').set('Sec-Fetch-Site', 'cross-site').send({ name: 'forged' })).status).toBe(403);
+    expect((await agent.post(path).set('Origin', 'null').send({ name: 'forged' })).status).toBe(403);
+    expect((await agent.post(path).set('Origin', 'null').set('Sec-Fetch-Site', 'same-origin').send({ name: 'own form' })).status).toBe(201);
+  });
+});
