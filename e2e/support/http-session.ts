@@ -4,7 +4,7 @@
 export type Json = Record<string, unknown> & unknown[] & string & number & null;
 
 /** JSON requests with the session cookie of one signed-in account. */
-export type HttpSession = { json: (method: string, path: string, body?: unknown) => Promise<{ status: number; body: Json }>; upload: (path: string, fields: Record<string, string>, file: { name: string; text: string }) => Promise<{ status: number; body: Json }> };
+export type HttpSession = { cookie: () => string; json: (method: string, path: string, body?: unknown) => Promise<{ status: number; body: Json }>; upload: (path: string, fields: Record<string, string>, file: { name: string; text: string }) => Promise<{ status: number; body: Json }> };
 
 const cookiesOf = (res: Response): string[] => res.headers.getSetCookie().map((c) => c.split(';')[0] as string);
 
@@ -31,6 +31,7 @@ export async function signInOverHttp(baseUrl: string, login: string): Promise<Ht
   const authorized = await go('/api/local-idp/authorize', { method: 'POST', body: form, headers: { 'content-type': 'application/x-www-form-urlencoded' } });
   await go(authorized.headers.get('location') as string);
   return {
+    cookie,
     json: async (method, path, body) => {
       const res = await go(path, { method, ...(body === undefined ? {} : { body: JSON.stringify(body), headers: { 'content-type': 'application/json' } }) });
       const text = await res.text();

@@ -57,8 +57,10 @@ function bench(rows: number, columns: number, queries: number): string[] {
     const lengthUnits = L + ((L - dMin) % 2);
     const t = performance.now();
     const r = routeCircuit(mesh, [], { kind: 'delay-line', id: 'd', from: a, to: b, lengthUnits });
+    if (k === 4) summary.push({ library: 'mesh', measure: `delay line of 4x the least length, ${columns} x ${rows}`, value: ms(t), unit: 'ms' });
     return `${lengthUnits} u: ${fmt(ms(t))} ms${r.ok ? '' : ` (${r.reason})`}`;
   });
+  summary.push({ library: 'mesh', measure: `shortest path, ${columns} x ${rows}`, value: spMs / queries, unit: 'ms' });
   const rings = [6, 10, 18].map((perimeterUnits) => {
     const times: number[] = [];
     let ok = 0;
@@ -68,6 +70,7 @@ function bench(rows: number, columns: number, queries: number): string[] {
       times.push(ms(t));
       if (r.ok) ok++;
     }
+    if (perimeterUnits === 6) summary.push({ library: 'mesh', measure: `6-unit ring placement, ${columns} x ${rows}`, value: median(times), unit: 'ms' });
     return `${perimeterUnits} u: ${fmt(median(times))} ms (${ok}/5)`;
   });
   return [
@@ -81,7 +84,11 @@ function bench(rows: number, columns: number, queries: number): string[] {
   ];
 }
 
+/** Headline figures for the root `npm run bench` table. */
+const summary: { library: string; measure: string; value: number; unit: string }[] = [];
+
 const header = ['mesh (columns x rows)', 'size', 'build', 'shortest-path queries', 'exact length 1x / 2x / 4x min', 'ring placement (median of 5)', 'heap after build'];
 process.stdout.write(`| ${header.join(' | ')} |\n|${header.map(() => '---').join('|')}|\n`);
 for (const [r, c] of [[8, 12], [30, 30], [60, 60]] as const) process.stdout.write(`| ${bench(r, c, 1000).join(' | ')} |\n`);
 process.stdout.write(`\nNode ${process.version}, ${new Date().toISOString().slice(0, 10)}\n`);
+process.stdout.write(`bench-summary: ${JSON.stringify(summary)}\n`);

@@ -52,6 +52,9 @@ const fmt = (x: number, d = 1): string => (Number.isFinite(x) ? x.toFixed(d) : S
   console.log(`solver benchmark, Node ${process.version}, ${new Date().toISOString().slice(0, 10)}`);
 }
 
+/** Headline figures for the root `npm run bench` table. */
+const summary: { library: string; measure: string; value: number; unit: string }[] = [];
+
 console.log('\n1. Fast route vs dense reference (mathjs) vs numpy peer, 1,024 points over one unit FSR');
 console.log(row(['chip', 'gates', 'fast ms', 'steps', 'numpy ms', 'speed-up', 'max |dH| np', 'ref ms/pt', 'ref 1024 (proj.)', 'max |dH| ref']));
 for (const [name, radius, refPoints] of [['radius-1', 1, 16], ['radius-2', 2, 4]] as const) {
@@ -76,6 +79,7 @@ for (const [name, radius, refPoints] of [['radius-1', 1, 16], ['radius-2', 2, 4]
     dRef = Math.max(dRef, Math.hypot(ref.re[q]![k]! - fast.spectrum.re[i]!, ref.im[q]![k]! - fast.spectrum.im[i]!));
   });
   console.log(row([name, mesh.gates.length, fmt(fast.ms, 2), fast.ir.steps, fmt(peer.seconds * 1e3), `${fmt((peer.seconds * 1e3) / fast.ms, 0)}x`, dNp.toExponential(1), fmt(refMsPerPoint), `${fmt((refMsPerPoint * 1024) / 1e3)} s`, dRef.toExponential(1)]));
+  summary.push({ library: 'solver', measure: `speed-up over the dense numpy peer, ${name}, 1,024 points`, value: (peer.seconds * 1e3) / fast.ms, unit: 'x' });
 }
 
 /** Places circuits one after another; returns the configuration and what was placed. */
@@ -115,6 +119,8 @@ for (const [name, shape, points, everyNth] of [
   const slots = chip.netlist.stageCount * 2;
   const stateMb = (slots * 4 * 8 + chip.netlist.stageCount * 3 * 4 + chip.netlist.outputPorts.length * fast.ir.steps * 16 + points * 6 * 16) / 2 ** 20;
   const rssMb = process.memoryUsage().rss / 2 ** 20;
+  summary.push({ library: 'solver', measure: `fast route, ${name}, ${points} points`, value: fast.ms, unit: 'ms' });
   console.log(row([name, mesh.gates.length, points, fmt(fast.ms, 1), fast.ir.steps, fast.ir.residualEnergy.toExponential(1), fmt(stateMb), fmt(rssMb, 0), placed.join('; ')]));
 }
 console.log(`\nmesh schema ${MESH_SCHEMA_VERSION}; fast route = impulse response (energy tolerance 1e-24) + 3 FFTs; median of repeats.`);
+console.log(`bench-summary: ${JSON.stringify(summary)}`);

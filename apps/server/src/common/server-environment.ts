@@ -1,5 +1,6 @@
 /** The server's settings read from environment variables (see .env.example), before any default is applied. */
 import type { CreateHexloomAppOptions } from '../app.factory.js';
+import { DEFAULT_RATE_LIMITS } from './rate-limit.js';
 
 /** What `main` starts: the app options, the port and the address to listen on. */
 export type ServerEnvironment = { options: Omit<CreateHexloomAppOptions, 'dataDir' | 'sessionSecret' | 'webDistDir'>; port: number; host: string };
@@ -18,7 +19,8 @@ const flag = (env: NodeJS.ProcessEnv, name: string): boolean | undefined => {
 
 /**
  * PORT (default 3000), HOST (default 127.0.0.1: this machine only; 0.0.0.0 to serve a network), PUBLIC_URL,
- * GITHUB_CLIENT_ID / GITHUB_CLIENT_SECRET, HEXLOOM_LOCAL_IDP, HEXLOOM_COOKIE_SECURE, HEXLOOM_SEED_DEMO(_DESIGNS), SMTP_URL.
+ * GITHUB_CLIENT_ID / GITHUB_CLIENT_SECRET, HEXLOOM_LOCAL_IDP, HEXLOOM_COOKIE_SECURE, HEXLOOM_SEED_DEMO(_DESIGNS), SMTP_URL,
+ * HEXLOOM_RATE_SIGN_IN_PER_MINUTE and HEXLOOM_RATE_COMPUTE_PER_MINUTE (defaults 60 and 300).
  */
 export function readServerEnvironment(env: NodeJS.ProcessEnv): ServerEnvironment {
   const port = Number(env['PORT'] ?? 3000);
@@ -28,11 +30,20 @@ export function readServerEnvironment(env: NodeJS.ProcessEnv): ServerEnvironment
   const clientSecret = env['GITHUB_CLIENT_SECRET'];
   const localIdp = flag(env, 'HEXLOOM_LOCAL_IDP');
   const cookieSecure = flag(env, 'HEXLOOM_COOKIE_SECURE');
+  const perMinute = (name: string, fallback: number): number => {
+    const v = env[name];
+    if (v === undefined || v === '') return fallback;
+    const n = Number(v);
+    if (!Number.isInteger(n) || n < 1) throw new EnvironmentError(`${name} must be a whole number of requests per minute >= 1, got "${v}"`);
+    return n;
+  };
+  const rateLimits = { signInPerMinute: perMinute('HEXLOOM_RATE_SIGN_IN_PER_MINUTE', DEFAULT_RATE_LIMITS.signInPerMinute), computePerMinute: perMinute('HEXLOOM_RATE_COMPUTE_PER_MINUTE', DEFAULT_RATE_LIMITS.computePerMinute) };
   return {
     port,
     host,
     options: {
       host,
+      rateLimits,
       seedDemo: flag(env, 'HEXLOOM_SEED_DEMO') ?? true,
       seedDemoDesigns: flag(env, 'HEXLOOM_SEED_DEMO_DESIGNS') ?? true,
       publicUrl: env['PUBLIC_URL'] || `http://localhost:${port}`,
