@@ -10,7 +10,7 @@ import type { HexloomOptions } from './common/hexloom-options.js';
 import { resolveOptions } from './common/resolve-options.js';
 import { sameOriginOnly } from './common/same-origin.middleware.js';
 import { setupOpenApi } from './common/setup-open-api.js';
-import { openDatabase } from './db/migrate.js';
+import { openDatabase, openServerDatabase } from './db/migrate.js';
 import { seedDemo } from './db/seed.js';
 import { seedDemoDesigns } from './db/seed-demo-designs.js';
 import { serveWebApp } from './web/serve-web-app.js';
@@ -27,10 +27,12 @@ export type CreateHexloomAppOptions = HexloomOptions & { logLevels?: LogLevel[] 
  */
 export async function createHexloomApp(options: CreateHexloomAppOptions): Promise<INestApplication> {
   const resolved = resolveOptions(options);
-  const database = await openDatabase(resolved.dataDir);
+  const database = resolved.databaseUrl ? await openServerDatabase(resolved.databaseUrl) : await openDatabase(resolved.dataDir);
   try {
-    if (resolved.seedDemo) await seedDemo(database.db);
-    if (resolved.seedDemoDesigns) await seedDemoDesigns(database.db);
+    await database.exclusive(async () => {
+      if (resolved.seedDemo) await seedDemo(database.db);
+      if (resolved.seedDemoDesigns) await seedDemoDesigns(database.db);
+    });
     const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(resolved, database), {
       logger: options.logLevels ?? ['error', 'warn'],
       abortOnError: false,

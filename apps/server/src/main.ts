@@ -7,7 +7,7 @@ import { Logger } from '@nestjs/common';
 import { createHexloomApp } from './app.factory.js';
 import { findRepoRoot } from './common/find-repo-root.js';
 import { HEXLOOM_OPTIONS, type ResolvedOptions } from './common/hexloom-options.js';
-import { readServerEnvironment } from './common/server-environment.js';
+import { EnvironmentError, readServerEnvironment } from './common/server-environment.js';
 
 /** SESSION_SECRET, or one generated once and kept in the data dir (random per run for `memory`). */
 function sessionSecret(dataDir: string): string {
@@ -30,7 +30,16 @@ async function main(): Promise<void> {
   const { options, port, host } = readServerEnvironment(process.env);
   const envDataDir = process.env['HEXLOOM_DATA_DIR'];
   const dataDir = envDataDir === 'memory' ? 'memory' : resolve(envDataDir || join(root, 'data'));
-  const app = await createHexloomApp({ ...options, dataDir, webDistDir: join(root, 'apps', 'web', 'dist'), sessionSecret: sessionSecret(dataDir) });
+  const databaseUrl = process.env['DATABASE_URL'] || undefined;
+  // Servers sharing a PostgreSQL database must sign cookies alike: the secret cannot be one each keeps locally.
+  if (databaseUrl && !process.env['SESSION_SECRET']) throw new EnvironmentError('DATABASE_URL is set: set SESSION_SECRET too, the same on every server sharing that database');
+  const app = await createHexloomApp({
+    ...options,
+    dataDir,
+    ...(databaseUrl ? { databaseUrl } : {}),
+    webDistDir: join(root, 'apps', 'web', 'dist'),
+    sessionSecret: sessionSecret(databaseUrl ? 'memory' : dataDir),
+  });
   app.enableShutdownHooks();
   await app.listen(port, host);
   const logger = new Logger('Hexloom');

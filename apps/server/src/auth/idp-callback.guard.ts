@@ -3,7 +3,7 @@ import { type CanActivate, type ExecutionContext, Inject, Injectable } from '@ne
 import { AuthGuard, type IAuthGuard } from '@nestjs/passport';
 import { HEXLOOM_OPTIONS, type ResolvedOptions } from '../common/hexloom-options.js';
 import { GITHUB_STRATEGY } from './github.strategy.js';
-import { LOCAL_IDP_STRATEGY } from './local-idp.strategy.js';
+import { localIdpStrategyName } from './local-idp.strategy.js';
 
 /** Delegates to `AuthGuard('github')` or `AuthGuard('local-idp')`; sets `req.user` on success. */
 @Injectable()
@@ -11,7 +11,7 @@ export class IdpCallbackGuard implements CanActivate {
   private readonly inner: IAuthGuard;
 
   constructor(@Inject(HEXLOOM_OPTIONS) options: ResolvedOptions) {
-    const Guard = AuthGuard(options.github ? GITHUB_STRATEGY : LOCAL_IDP_STRATEGY);
+    const Guard = AuthGuard(options.github ? GITHUB_STRATEGY : localIdpStrategyName(options.instanceId));
     this.inner = new Guard();
   }
 

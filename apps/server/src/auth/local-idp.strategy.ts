@@ -1,5 +1,7 @@
 /** passport-custom strategy verifying a fake-provider callback through the provider's own token and user logic. */
-import { Injectable } from '@nestjs/common';
+import { Inject, Injectable } from '@nestjs/common';
+import passport from 'passport';
+import { HEXLOOM_OPTIONS, type ResolvedOptions } from '../common/hexloom-options.js';
 import { PassportStrategy } from '@nestjs/passport';
 import type { User } from '@hexloom/contracts';
 import type { Request } from 'express';
@@ -10,14 +12,22 @@ import { AuthService } from './auth.service.js';
 /** Strategy name used by the callback guard when no GitHub credentials are configured. */
 export const LOCAL_IDP_STRATEGY = 'local-idp';
 
+/**
+ * The strategy name of one application: passport keeps strategies in one registry per process, so two applications
+ * in one process (tests of two servers) must not replace each other's.
+ */
+export const localIdpStrategyName = (instanceId: string): string => `${LOCAL_IDP_STRATEGY}:${instanceId}`;
+
 /** Exchanges `?code` in-process (same logic as POST /api/local-idp/access_token and GET /user). */
 @Injectable()
 export class LocalIdpStrategy extends PassportStrategy(CustomStrategy, LOCAL_IDP_STRATEGY) {
   constructor(
     private readonly idp: LocalIdpService,
     private readonly auth: AuthService,
+    @Inject(HEXLOOM_OPTIONS) options: ResolvedOptions,
   ) {
     super();
+    passport.use(localIdpStrategyName(options.instanceId), this as unknown as passport.Strategy);
   }
 
   async validate(req: Request): Promise<User> {

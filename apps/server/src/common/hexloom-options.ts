@@ -5,8 +5,10 @@ export type GithubCredentials = { clientId: string; clientSecret: string };
 
 /** Everything a Hexloom server instance needs to know at start. */
 export type HexloomOptions = {
-  /** Folder of the PGlite database, or `'memory'` for a throw-away in-memory one. */
+  /** Folder of the PGlite database, or `'memory'` for a throw-away in-memory one (unused with `databaseUrl`). */
   dataDir: string | 'memory';
+  /** A PostgreSQL server (`postgres://user@host:5432/db`) instead of the embedded database; several servers may share it. */
+  databaseUrl?: string;
   /** Insert the invented demo team and accounts (idempotent). */
   seedDemo: boolean;
   /** With seedDemo: also the demo chip, calibration, configurations, reviews and a synthetic measurement (default true). */
@@ -38,6 +40,7 @@ export type HexloomOptions = {
 /** Options after defaults were applied. */
 export type ResolvedOptions = {
   dataDir: string;
+  databaseUrl: string | null;
   seedDemo: boolean;
   seedDemoDesigns: boolean;
   webDistDir: string | null;
@@ -48,6 +51,8 @@ export type ResolvedOptions = {
   smtpUrl: string | null;
   mailFrom: string;
   host: string;
+  /** Random id of this application instance (names its passport strategy). */
+  instanceId: string;
   rateLimits: { signInPerMinute: number; computePerMinute: number };
   /** Whether sign-in goes through the built-in local identity provider (never with code-host credentials). */
   localIdp: boolean;

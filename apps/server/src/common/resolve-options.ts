@@ -38,9 +38,11 @@ export function resolveOptions(options: HexloomOptions): ResolvedOptions {
   const localIdp = github ? false : localIdpAllowed(options.localIdp, host, publicUrl);
   return {
     host,
+    instanceId: randomBytes(8).toString('hex'),
     localIdp,
     rateLimits: options.rateLimits ?? DEFAULT_RATE_LIMITS,
     dataDir: options.dataDir,
+    databaseUrl: options.databaseUrl || null,
     seedDemo: options.seedDemo,
     seedDemoDesigns: options.seedDemo && (options.seedDemoDesigns ?? true),
     webDistDir: options.webDistDir ?? null,

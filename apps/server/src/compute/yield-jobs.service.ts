@@ -2,7 +2,7 @@
 import { Inject, Injectable, Logger, NotFoundException, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
 import type { StartYieldJob, User, YieldJob } from '@hexloom/contracts';
 import { planMonteCarlo, summariseMonteCarlo, type MonteCarloRun } from '@hexloom/synth';
-import { and, eq } from 'drizzle-orm';
+import { and, count, eq, lt, notInArray } from 'drizzle-orm';
 import { Piscina } from 'piscina';
 import { concat, finalize, type Observable, of, Subject, takeWhile } from 'rxjs';
 import { AuditService } from '../audit/audit.service.js';
@@ -10,7 +10,12 @@ import { buildChipMesh } from '../chips/chips.service.js';
 import { ConfigurationsService, type VersionRef } from '../configurations/configurations.service.js';
 import { DATABASE, type Database } from '../db/database.js';
 import { loginMap } from '../db/login-map.js';
-import { yieldJobs, type YieldJobRow } from '../db/schema/index.js';
+import { configurations, configurationVersions, yieldJobs, type YieldJobRow } from '../db/schema/index.js';
+import { OPEN_DATABASE } from '../db/database.module.js';
+import type { OpenDatabase } from '../db/migrate.js';
+
+/** A running job of a shared database with no sign of life for this long belongs to a stopped server. */
+const STALE_JOB_MS = 120_000;
 import { TooManyJobsError } from './compute-errors.js';
 import { resolvePort } from './resolve-port.js';
 import { SimulationService } from './simulation.service.js';
@@ -37,15 +42,29 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
   /** Updates of each running job, pushed to its event streams as they happen (no stream polls the database). */
   private readonly updates = new Map<string, Subject<YieldJob>>();
   private readonly streams = new Map<string, number>();
+  private sweeper: NodeJS.Timeout | null = null;
 
-  /** A job that was running when the server stopped will never finish: it is marked interrupted at start-up. */
+  /**
+   * A job whose server stopped will never finish: it is marked interrupted. The embedded database has one server, so
+   * at start-up every running job is its own stopped one; on a shared PostgreSQL server only jobs with no sign of life
+   * for `STALE_JOB_MS` are, at start-up and then every minute.
+   */
   async onApplicationBootstrap(): Promise<void> {
+    await this.interruptStale(this.open.mode === 'embedded' ? 0 : STALE_JOB_MS);
+    if (this.open.mode === 'server') {
+      this.sweeper = setInterval(() => void this.interruptStale(STALE_JOB_MS).catch(() => undefined), 60_000);
+      this.sweeper.unref();
+    }
+  }
+
+  private async interruptStale(olderThanMs: number): Promise<void> {
+    const mine = [...this.running.keys()];
     const stale = await this.db
       .update(yieldJobs)
       .set({ status: 'interrupted', error: 'the server stopped while this job ran; start it again' })
-      .where(eq(yieldJobs.status, 'running'))
+      .where(and(eq(yieldJobs.status, 'running'), lt(yieldJobs.heartbeatAt, new Date(Date.now() - olderThanMs)), mine.length > 0 ? notInArray(yieldJobs.id, mine) : undefined))
       .returning({ id: yieldJobs.id });
-    if (stale.length > 0) this.logger.warn(`${stale.length} yield job(s) left running by the last server were marked interrupted`);
+    if (stale.length > 0) this.logger.warn(`${stale.length} yield job(s) whose server stopped were marked interrupted`);
   }
 
   constructor(
@@ -53,12 +72,13 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
     private readonly configurations: ConfigurationsService,
     private readonly simulation: SimulationService,
     private readonly audit: AuditService,
+    @Inject(OPEN_DATABASE) private readonly open: OpenDatabase,
   ) {}
 
   /** Starts a study of one version and returns at once; the chunks run in worker threads. */
   async start(actor: User, teamId: string, configurationId: string, number: number, body: StartYieldJob): Promise<YieldJob> {
     const ref = await this.configurations.findVersionOrFail(teamId, configurationId, number);
-    const mine = [...this.running.values()].filter((r) => r.teamId === teamId).length;
+    const mine = await this.runningJobsOfTeam(teamId);
     if (mine >= MAX_RUNNING_JOBS_PER_TEAM) throw new TooManyJobsError(`the team already has ${mine} yield jobs running (at most ${MAX_RUNNING_JOBS_PER_TEAM}); wait for one to finish or cancel one`);
     const mesh = buildChipMesh(ref.version.content.mesh);
     const from = resolvePort(mesh, body.from, 'from');
@@ -82,6 +102,17 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
     return (await this.toJobs([row]))[0] as YieldJob;
   }
 
+  /** Running jobs of a team, on every server sharing the database. */
+  private async runningJobsOfTeam(teamId: string): Promise<number> {
+    const [row] = await this.db
+      .select({ n: count() })
+      .from(yieldJobs)
+      .innerJoin(configurationVersions, eq(configurationVersions.id, yieldJobs.versionId))
+      .innerJoin(configurations, eq(configurations.id, configurationVersions.configurationId))
+      .where(and(eq(yieldJobs.status, 'running'), eq(configurations.teamId, teamId)));
+    return row?.n ?? 0;
+  }
+
   /** Job `jobId` of the version, or 404. */
   async get(teamId: string, configurationId: string, number: number, jobId: string): Promise<YieldJob> {
     const ref = await this.configurations.findVersionOrFail(teamId, configurationId, number);
@@ -93,11 +124,12 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
     const ref = await this.configurations.findVersionOrFail(teamId, configurationId, number);
     const row = await this.rowOrFail(ref, jobId);
     if (row.status === 'running') {
-      this.running.get(jobId)?.abort.abort();
       await this.db.transaction(async (tx) => {
         await tx.update(yieldJobs).set({ status: 'cancelled' }).where(and(eq(yieldJobs.id, jobId), eq(yieldJobs.status, 'running')));
         await this.audit.record({ action: 'yield_job.cancelled', teamId, actorId: actor.id, target: `${ref.configuration.name} v${number}`, detail: { jobId } }, tx);
       });
+      // Stop the workers after the status is written, then give the streams the last state.
+      this.running.get(jobId)?.abort.abort();
       await this.publish(jobId, true);
     }
     return this.get(teamId, configurationId, number, jobId);
@@ -133,6 +165,7 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
   }
 
   async onApplicationShutdown(): Promise<void> {
+    if (this.sweeper) clearInterval(this.sweeper);
     for (const r of this.running.values()) r.abort.abort();
     this.running.clear();
     await this.pool?.destroy();
@@ -149,7 +182,7 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
         const results = await Promise.all(batch.map((task) => pool.run(task, { signal }) as Promise<MonteCarloRun[]>));
         for (const r of results) runs.push(...r);
         if (signal.aborted) break;
-        await this.db.update(yieldJobs).set({ runsDone: runs.length }).where(and(eq(yieldJobs.id, jobId), eq(yieldJobs.status, 'running')));
+        await this.db.update(yieldJobs).set({ runsDone: runs.length, heartbeatAt: new Date() }).where(and(eq(yieldJobs.id, jobId), eq(yieldJobs.status, 'running')));
         await this.publish(jobId);
       }
       if (!signal.aborted) {
@@ -167,7 +200,8 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
       }
     } finally {
       this.running.delete(jobId);
-      await this.publish(jobId, true).catch(() => undefined);
+      // A cancelled job's streams get their last event from cancel(), after its status is written.
+      if (!signal.aborted) await this.publish(jobId, true).catch(() => undefined);
     }
   }
 

@@ -3,7 +3,8 @@ import { type DynamicModule, Global, Inject, Injectable, Module, type OnApplicat
 import { DATABASE } from './database.js';
 import type { OpenDatabase } from './migrate.js';
 
-const OPEN_DATABASE = Symbol('hexloom:open-database');
+/** Injection token of the open database itself (its mode, its close). */
+export const OPEN_DATABASE = Symbol('hexloom:open-database');
 
 /** Closes the database (and frees its data folder) when the application shuts down. */
 @Injectable()
@@ -28,7 +29,7 @@ export class DatabaseModule {
         { provide: OPEN_DATABASE, useValue: open },
         DatabaseCloser,
       ],
-      exports: [DATABASE],
+      exports: [DATABASE, OPEN_DATABASE],
     };
   }
 }

@@ -1,9 +1,9 @@
 /** The Drizzle database handle type and its injection token. */
-import type { PgliteDatabase } from 'drizzle-orm/pglite';
+import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
 import type * as schema from './schema/index.js';
 
-/** The typed Drizzle handle over PGlite used by every repository and service. */
-export type Database = PgliteDatabase<typeof schema>;
+/** The typed Drizzle handle used by every repository and service: embedded PGlite or a PostgreSQL server (node-postgres). */
+export type Database = PgDatabase<PgQueryResultHKT, typeof schema>;
 
 /** Injection token under which the Drizzle handle is provided. */
 export const DATABASE = Symbol('hexloom:database');

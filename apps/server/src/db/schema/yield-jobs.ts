@@ -23,6 +23,8 @@ export const yieldJobs = pgTable(
       .notNull()
       .references(() => users.id),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    /** Last sign of life of the server running the job (set as chunks finish). */
+    heartbeatAt: timestamp('heartbeat_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [check('yield_jobs_status_check', sql`${t.status} in ('running', 'done', 'cancelled', 'failed', 'interrupted')`)],
 );

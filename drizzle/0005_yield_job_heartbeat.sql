@@ -1,0 +1,1 @@
+ALTER TABLE "yield_jobs" ADD COLUMN "heartbeat_at" timestamp with time zone DEFAULT now() NOT NULL;
