@@ -1,81 +1,20 @@
 // Faults: the built server is killed with SIGKILL in the middle of saves and uploads, again and again, on one data folder;
-// after every restart each acknowledged write is there and nothing half-written is.
+// after every restart each acknowledged write is there and nothing half-written is. The same cycles on PostgreSQL are in
+// apps/server/test-pg/faults.spec.ts.
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, describe, expect, it } from 'vitest';
-import { signInOverHttp } from './support/http-session.js';
-import { startServer, type RunningServer } from './support/start-server.js';
+import { afterAll, describe, it } from 'vitest';
+import { expectNothingLost, runKillCycles } from './support/kill-cycles.js';
 
 const CYCLES = 6;
 const dataDir = mkdtempSync(join(tmpdir(), 'hexloom-faults-'));
-let server: RunningServer | undefined;
 
-afterAll(async () => {
-  await server?.kill();
-  rmSync(dataDir, { recursive: true, force: true });
-});
-
-type Ack = { kind: 'version'; number: number; note: string } | { kind: 'measurement'; label: string };
+afterAll(() => rmSync(dataDir, { recursive: true, force: true }));
 
 describe('a server killed during writes', () => {
   it(`keeps every acknowledged save and upload over ${CYCLES} SIGKILL and restart cycles`, async () => {
-    const acks: Ack[] = [];
-    let base = '';
-    let measurementsPath = '';
-    let ports: string[] = [];
-    let killedWhileWriting = 0;
-    for (let cycle = 0; cycle < CYCLES; cycle++) {
-      server = await startServer({ dataDir, env: { HEXLOOM_SEED_DEMO_DESIGNS: 'false' } });
-      const noor = await signInOverHttp(server.url, 'noor');
-      if (cycle === 0) {
-        const teams = (await noor.json('GET', '/api/teams')).body as unknown as { id: string }[];
-        const teamId = teams[0]!.id;
-        const tech = { unitLengthUm: 650, groupIndex: 4.2, referenceFrequencyHz: 193.4e12, lossPerGateDb: 0.25, bendLossDb: 0, extinctionDb: 25, phaseShifter: { piPowerW: 0.022, resistanceOhm: 1200, maxPowerW: 0.06, maxVoltageV: 9 } };
-        const chip = (await noor.json('POST', `/api/teams/${teamId}/chips`, { name: 'faults chip', template: { rows: 2, columns: 3 }, technology: tech })).body as unknown as { id: string; definition: { ports: { id: string }[] } };
-        ports = [chip.definition.ports[0]!.id, chip.definition.ports[chip.definition.ports.length - 1]!.id];
-        const created = (await noor.json('POST', `/api/teams/${teamId}/chips/${chip.id}/configurations`, { name: 'faults' })).body as unknown as { id: string };
-        base = `/api/teams/${teamId}/configurations/${created.id}`;
-        measurementsPath = `${base}/versions/1/measurements`;
-      }
-      // Writes in a loop until the kill lands; every 201 is an acknowledged write.
-      const v1 = (await noor.json('GET', `${base}/versions/1`)).body as unknown as { content: unknown };
-      let writing = true;
-      const writer = (async () => {
-        for (let k = 0; writing; k++) {
-          try {
-            const detail = (await noor.json('GET', base)).body as unknown as { headVersion: number };
-            const note = `cycle ${cycle} save ${k}`;
-            const saved = await noor.json('POST', `${base}/versions`, { baseVersion: detail.headVersion, content: v1.content, note });
-            if (saved.status === 201) acks.push({ kind: 'version', number: (saved.body as unknown as { number: number }).number, note });
-            const label = `cycle ${cycle} upload ${k}`;
-            const csv = `frequency_hz,amplitude_db\n193400000000000,-3\n193400001000000,-${3 + k / 100}\n`;
-            const up = await noor.upload(measurementsPath, { from: ports[0]!, to: ports[1]!, label }, { name: 'm.csv', text: csv });
-            if (up.status === 201) acks.push({ kind: 'measurement', label });
-          } catch {
-            return; // the connection died with the server
-          }
-        }
-      })();
-      await new Promise((r) => setTimeout(r, 400 + 150 * cycle));
-      killedWhileWriting += 1;
-      await server.kill();
-      writing = false;
-      await writer;
-    }
-    server = await startServer({ dataDir, env: { HEXLOOM_SEED_DEMO_DESIGNS: 'false' } });
-    const noor = await signInOverHttp(server.url, 'noor');
-    const detail = (await noor.json('GET', base)).body as unknown as { headVersion: number; versions: { number: number; note: string }[] };
-    const measured = (await noor.json('GET', measurementsPath)).body as unknown as { label: string }[];
-    // Every acknowledged write survived.
-    for (const a of acks) {
-      if (a.kind === 'version') expect(detail.versions.find((v) => v.number === a.number)?.note, a.note).toBe(a.note);
-      else expect(measured.map((m) => m.label)).toContain(a.label);
-    }
-    // Nothing half-written: versions 1..head with no gap, and the head is the newest one.
-    expect(detail.versions.map((v) => v.number).sort((x, y) => x - y)).toEqual(Array.from({ length: detail.headVersion }, (_, i) => i + 1));
-    expect(acks.filter((a) => a.kind === 'version').length).toBeGreaterThan(CYCLES);
-    expect(killedWhileWriting).toBe(CYCLES);
-    process.stdout.write(`faults: ${CYCLES} SIGKILL cycles, ${acks.length} acknowledged writes (${acks.filter((a) => a.kind === 'version').length} saves, ${acks.filter((a) => a.kind === 'measurement').length} uploads), 0 lost\n`);
+    const result = await runKillCycles(CYCLES, { dataDir });
+    process.stdout.write(expectNothingLost('data folder', CYCLES, result));
   }, 600_000);
 });

@@ -18,7 +18,7 @@ export default defineConfig({
         // @blueprintjs/icons is left out on purpose: its icon paths are lazy chunks.
         codeSplitting: {
           groups: [
-            { name: 'vendor-react', test: /node_modules[\\/](react|react-dom|scheduler|react-router)[\\/]/ },
+            { name: 'vendor-react', test: /node_modules[\\/](react|react-dom|scheduler|react-router|react-router-dom)[\\/]/ },
             { name: 'vendor-blueprint', test: /node_modules[\\/]@blueprintjs[\\/](core|table|colors)[\\/]/ },
             { name: 'vendor-tanstack', test: /node_modules[\\/]@tanstack[\\/]/ },
             { name: 'vendor-d3', test: /node_modules[\\/](d3|d3-[a-z-]+|internmap|delaunator|robust-predicates)[\\/]/ },

@@ -23,7 +23,7 @@ describe('a fresh in-memory database', () => {
     const rows = (await sut.db.execute(sql`select table_name from information_schema.tables where table_schema = 'public' order by table_name`)) as unknown as { rows: { table_name: string }[] };
     expect(rows.rows.map((r) => r.table_name)).toEqual([
       'audit_events', 'calibrations', 'chips', 'comments', 'configuration_versions', 'configurations', 'invitations', 'measurements',
-      'memberships', 'outbox_messages', 'reviews', 'sessions', 'simulation_cache', 'teams', 'users', 'yield_jobs',
+      'memberships', 'outbox_messages', 'reviews', 'sessions', 'simulation_cache', 'teams', 'users', 'yield_chunk_results', 'yield_jobs',
     ]);
   });
 

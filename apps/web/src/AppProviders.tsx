@@ -1,7 +1,7 @@
 // Providers around the router: data cache, theme, Blueprint overlays and hotkeys.
 import { BlueprintProvider } from '@blueprintjs/core';
 import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
-import { RouterProvider, type createBrowserRouter } from 'react-router';
+import { RouterProvider, type createBrowserRouter } from 'react-router-dom';
 import { ThemeProvider } from './modules/theme/components/ThemeProvider.js';
 
 export type AppProvidersProps = { queryClient: QueryClient; router: ReturnType<typeof createBrowserRouter> };

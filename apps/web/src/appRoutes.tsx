@@ -1,5 +1,5 @@
 // The route tree of the web app.
-import type { RouteObject } from 'react-router';
+import type { RouteObject } from 'react-router-dom';
 import { ROUTES } from './routes.js';
 import { AppLayout } from './modules/shell/components/AppLayout.js';
 import { ConfigurationPage } from './pages/ConfigurationPage.js';

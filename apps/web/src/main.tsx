@@ -9,7 +9,7 @@ import '@blueprintjs/table/lib/css/table.css';
 import './styles/hexloom.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { createBrowserRouter } from 'react-router';
+import { createBrowserRouter } from 'react-router-dom';
 import { AppProviders } from './AppProviders.js';
 import { appRoutes } from './appRoutes.js';
 import { createQueryClient } from './modules/core/api/createQueryClient.js';

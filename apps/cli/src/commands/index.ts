@@ -8,8 +8,9 @@ import { registerSimulateCommand } from './simulate.js';
 import { registerSparamsCommand } from './sparams.js';
 import { registerSynthCommand } from './synth.js';
 import { registerYieldCommand } from './yield.js';
+import { registerWorkerCommand } from './worker.js';
 
 /** A function that adds one or more subcommands to the program. */
 export type RegisterCommand = (program: Command) => void;
 
-export const COMMANDS: readonly RegisterCommand[] = [registerVersionCommand, registerMeshCommand, registerRouteCommand, registerCheckCommand, registerSimulateCommand, registerSparamsCommand, registerSynthCommand, registerYieldCommand];
+export const COMMANDS: readonly RegisterCommand[] = [registerVersionCommand, registerMeshCommand, registerRouteCommand, registerCheckCommand, registerSimulateCommand, registerSparamsCommand, registerSynthCommand, registerYieldCommand, registerWorkerCommand];

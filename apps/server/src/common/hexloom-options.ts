@@ -1,4 +1,5 @@
 /** Options of createHexloomApp and the token they are provided under. */
+import type { QueueTiming } from '../queue/yield-queue.js';
 
 /** GitHub OAuth app credentials; when absent the built-in fake identity provider is used. */
 export type GithubCredentials = { clientId: string; clientSecret: string };
@@ -9,6 +10,10 @@ export type HexloomOptions = {
   dataDir: string | 'memory';
   /** A PostgreSQL server (`postgres://user@host:5432/db`) instead of the embedded database; several servers may share it. */
   databaseUrl?: string;
+  /** With `databaseUrl`: whether this server also takes Monte Carlo chunks from the shared queue (default true). */
+  queueWorker?: boolean;
+  /** With `databaseUrl`: when a chunk whose worker vanished goes to another, and how often the queue is tidied. */
+  queueTiming?: QueueTiming;
   /** Insert the invented demo team and accounts (idempotent). */
   seedDemo: boolean;
   /** With seedDemo: also the demo chip, calibration, configurations, reviews and a synthetic measurement (default true). */
@@ -41,6 +46,8 @@ export type HexloomOptions = {
 export type ResolvedOptions = {
   dataDir: string;
   databaseUrl: string | null;
+  queueWorker: boolean;
+  queueTiming: QueueTiming;
   seedDemo: boolean;
   seedDemoDesigns: boolean;
   webDistDir: string | null;

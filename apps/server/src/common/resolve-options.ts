@@ -1,6 +1,7 @@
 /** Applies defaults to createHexloomApp options. */
 import { randomBytes } from 'node:crypto';
 import type { HexloomOptions, ResolvedOptions } from './hexloom-options.js';
+import { DEFAULT_QUEUE_TIMING } from '../queue/yield-queue.js';
 import { DEFAULT_RATE_LIMITS } from './rate-limit.js';
 
 /** Thrown for options that cannot work; the message names the bad value. */
@@ -43,6 +44,8 @@ export function resolveOptions(options: HexloomOptions): ResolvedOptions {
     rateLimits: options.rateLimits ?? DEFAULT_RATE_LIMITS,
     dataDir: options.dataDir,
     databaseUrl: options.databaseUrl || null,
+    queueWorker: options.queueWorker ?? true,
+    queueTiming: options.queueTiming ?? DEFAULT_QUEUE_TIMING,
     seedDemo: options.seedDemo,
     seedDemoDesigns: options.seedDemo && (options.seedDemoDesigns ?? true),
     webDistDir: options.webDistDir ?? null,

@@ -13,4 +13,9 @@ describe('readServerEnvironment', () => {
     expect(() => readServerEnvironment({ HEXLOOM_LOCAL_IDP: 'yes' })).toThrow(/HEXLOOM_LOCAL_IDP/);
     expect(() => readServerEnvironment({ PORT: '70000' })).toThrow(/PORT "70000"/);
   });
+  it('passes HEXLOOM_QUEUE_WORKER through only when set', () => {
+    expect(readServerEnvironment({}).options.queueWorker).toBeUndefined();
+    expect(readServerEnvironment({ HEXLOOM_QUEUE_WORKER: 'false' }).options.queueWorker).toBe(false);
+    expect(() => readServerEnvironment({ HEXLOOM_QUEUE_WORKER: '0' })).toThrow(/HEXLOOM_QUEUE_WORKER/);
+  });
 });

@@ -20,7 +20,8 @@ const flag = (env: NodeJS.ProcessEnv, name: string): boolean | undefined => {
 /**
  * PORT (default 3000), HOST (default 127.0.0.1: this machine only; 0.0.0.0 to serve a network), PUBLIC_URL,
  * GITHUB_CLIENT_ID / GITHUB_CLIENT_SECRET, HEXLOOM_LOCAL_IDP, HEXLOOM_COOKIE_SECURE, HEXLOOM_SEED_DEMO(_DESIGNS), SMTP_URL,
- * HEXLOOM_RATE_SIGN_IN_PER_MINUTE and HEXLOOM_RATE_COMPUTE_PER_MINUTE (defaults 60 and 300).
+ * HEXLOOM_RATE_SIGN_IN_PER_MINUTE and HEXLOOM_RATE_COMPUTE_PER_MINUTE (defaults 60 and 300), HEXLOOM_QUEUE_WORKER (with
+ * DATABASE_URL: whether this server takes yield chunks itself, default true).
  */
 export function readServerEnvironment(env: NodeJS.ProcessEnv): ServerEnvironment {
   const port = Number(env['PORT'] ?? 3000);
@@ -30,6 +31,7 @@ export function readServerEnvironment(env: NodeJS.ProcessEnv): ServerEnvironment
   const clientSecret = env['GITHUB_CLIENT_SECRET'];
   const localIdp = flag(env, 'HEXLOOM_LOCAL_IDP');
   const cookieSecure = flag(env, 'HEXLOOM_COOKIE_SECURE');
+  const queueWorker = flag(env, 'HEXLOOM_QUEUE_WORKER');
   const perMinute = (name: string, fallback: number): number => {
     const v = env[name];
     if (v === undefined || v === '') return fallback;
@@ -50,6 +52,7 @@ export function readServerEnvironment(env: NodeJS.ProcessEnv): ServerEnvironment
       ...(clientId && clientSecret ? { github: { clientId, clientSecret } } : {}),
       ...(localIdp !== undefined ? { localIdp } : {}),
       ...(cookieSecure ? { cookieSecure } : {}),
+      ...(queueWorker !== undefined ? { queueWorker } : {}),
       ...(env['SMTP_URL'] ? { smtpUrl: env['SMTP_URL'] } : {}),
       logLevels: ['log', 'error', 'warn'],
     },

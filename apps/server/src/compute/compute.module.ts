@@ -6,7 +6,8 @@ import { ComputeController } from './compute.controller.js';
 import { EditService } from './edit.service.js';
 import { SimulationService } from './simulation.service.js';
 import { YieldJobsService } from './yield-jobs.service.js';
+import { YieldQueueService } from '../queue/yield-queue.service.js';
 
 /** Exports SimulationService for bench export (Touchstone) and measurement comparison. */
-@Module({ imports: [AuditModule, ConfigurationsModule], controllers: [ComputeController], providers: [SimulationService, EditService, YieldJobsService], exports: [SimulationService] })
+@Module({ imports: [AuditModule, ConfigurationsModule], controllers: [ComputeController], providers: [SimulationService, EditService, YieldJobsService, YieldQueueService], exports: [SimulationService] })
 export class ComputeModule {}

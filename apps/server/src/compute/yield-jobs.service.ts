@@ -13,6 +13,7 @@ import { loginMap } from '../db/login-map.js';
 import { configurations, configurationVersions, yieldJobs, type YieldJobRow } from '../db/schema/index.js';
 import { OPEN_DATABASE } from '../db/database.module.js';
 import type { OpenDatabase } from '../db/migrate.js';
+import { YieldQueueService } from '../queue/yield-queue.service.js';
 
 /** A running job of a shared database with no sign of life for this long belongs to a stopped server. */
 const STALE_JOB_MS = 120_000;
@@ -50,6 +51,8 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
    * for `STALE_JOB_MS` are, at start-up and then every minute.
    */
   async onApplicationBootstrap(): Promise<void> {
+    // Queued jobs resume where they stopped (their chunks stay on the queue); only in-process jobs can be orphaned.
+    if (this.queue.shared) return;
     await this.interruptStale(this.open.mode === 'embedded' ? 0 : STALE_JOB_MS);
     if (this.open.mode === 'server') {
       this.sweeper = setInterval(() => void this.interruptStale(STALE_JOB_MS).catch(() => undefined), 60_000);
@@ -73,9 +76,10 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
     private readonly simulation: SimulationService,
     private readonly audit: AuditService,
     @Inject(OPEN_DATABASE) private readonly open: OpenDatabase,
+    private readonly queue: YieldQueueService,
   ) {}
 
-  /** Starts a study of one version and returns at once; the chunks run in worker threads. */
+  /** Starts a study of one version and returns at once; the chunks run in worker threads (or go to the shared queue). */
   async start(actor: User, teamId: string, configurationId: string, number: number, body: StartYieldJob): Promise<YieldJob> {
     const ref = await this.configurations.findVersionOrFail(teamId, configurationId, number);
     const mine = await this.runningJobsOfTeam(teamId);
@@ -86,7 +90,7 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
     const offsetsHz = this.simulation.offsets(ref.version.content, body.grid);
     const chunks = planMonteCarlo({ runs: body.runs, seed: body.seed, chunkSize: Math.max(1, Math.ceil(body.runs / CHUNKS_PER_JOB)) });
     const row = await this.db.transaction(async (tx) => {
-      const [inserted] = await tx.insert(yieldJobs).values({ versionId: ref.version.id, request: body, runsTotal: body.runs, createdBy: actor.id }).returning();
+      const [inserted] = await tx.insert(yieldJobs).values({ versionId: ref.version.id, request: body, runsTotal: body.runs, chunkCount: chunks.length, createdBy: actor.id }).returning();
       if (!inserted) throw new Error('YieldJobsService.start: insert returned no row');
       await this.audit.record(
         { action: 'yield_job.started', teamId, actorId: actor.id, target: `${ref.configuration.name} v${number}`, detail: { jobId: inserted.id, runs: body.runs, seed: body.seed } },
@@ -94,11 +98,17 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
       );
       return inserted;
     });
-    const abort = new AbortController();
-    this.running.set(row.id, { abort, teamId });
-    this.updates.set(row.id, new Subject<YieldJob>());
     const base = { configuration: ref.version.content, from, to, offsetsHz, mask: body.mask.regions, tolerance: { couplerSigmaRad: body.couplerSigmaRad, phaseSigmaRad: body.phaseSigmaRad } };
-    void this.run(row.id, chunks.map((chunk) => ({ ...base, chunk })), abort.signal);
+    const tasks = chunks.map((chunk) => ({ ...base, chunk }));
+    if (this.queue.shared) {
+      // On a shared database the chunks go to the queue: any server or `hexloom worker` takes them.
+      await this.queue.enqueue(row.id, tasks);
+    } else {
+      const abort = new AbortController();
+      this.running.set(row.id, { abort, teamId });
+      this.updates.set(row.id, new Subject<YieldJob>());
+      void this.run(row.id, tasks, abort.signal);
+    }
     return (await this.toJobs([row]))[0] as YieldJob;
   }
 
@@ -143,6 +153,7 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
     const now = await this.get(teamId, configurationId, number, jobId);
     const open = this.streams.get(userId) ?? 0;
     if (open >= MAX_STREAMS_PER_USER) throw new TooManyJobsError(`you already follow ${open} yield job streams (at most ${MAX_STREAMS_PER_USER}); close one first`);
+    if (now.status === 'running' && this.queue.shared) this.watch(teamId, configurationId, number, jobId);
     const live = this.updates.get(jobId);
     if (now.status !== 'running' || !live) return of(now);
     this.streams.set(userId, open + 1);
@@ -150,6 +161,25 @@ export class YieldJobsService implements OnApplicationBootstrap, OnApplicationSh
       takeWhile((job) => job.status === 'running', true),
       finalize(() => this.streams.set(userId, Math.max(0, (this.streams.get(userId) ?? 1) - 1))),
     );
+  }
+
+  /**
+   * On a shared database the chunks finish on other machines: one poll per followed job (not per stream) reads it each
+   * second and pushes it to its streams until it ends.
+   */
+  private watch(teamId: string, configurationId: string, number: number, jobId: string): void {
+    if (this.updates.has(jobId)) return;
+    this.updates.set(jobId, new Subject<YieldJob>());
+    const timer = setInterval(() => {
+      void this.get(teamId, configurationId, number, jobId)
+        .then(async (job) => {
+          const running = job.status === 'running';
+          if (!running) clearInterval(timer);
+          await this.publish(jobId, !running);
+        })
+        .catch(() => clearInterval(timer));
+    }, 1_000);
+    timer.unref();
   }
 
   /** Reads the job and pushes it to its streams; `last` ends them. */

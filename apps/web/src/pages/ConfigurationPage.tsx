@@ -1,7 +1,7 @@
 // /t/:teamSlug/configurations/:configurationId: versions with their review status, and the simulated response.
 import { HTMLTable } from '@blueprintjs/core';
 import { useState } from 'react';
-import { Link, useParams } from 'react-router';
+import { Link, useParams } from 'react-router-dom';
 import { teamHomePath } from '../routes.js';
 import { ApiErrorCallout } from '../modules/core/components/ApiErrorCallout.js';
 import { NotFoundState } from '../modules/core/components/NotFoundState.js';

@@ -1,6 +1,6 @@
 // /: sends a signed-in user to their first team (AppLayout already sent strangers to /signin).
 import { NonIdealState } from '@blueprintjs/core';
-import { Navigate } from 'react-router';
+import { Navigate } from 'react-router-dom';
 import { teamHomePath } from '../routes.js';
 import { useMe } from '../modules/auth/api/useMe.js';
 

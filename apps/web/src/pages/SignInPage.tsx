@@ -1,5 +1,5 @@
 // /signin: the public entry page.
-import { useSearchParams } from 'react-router';
+import { useSearchParams } from 'react-router-dom';
 import { safeReturnTo } from '../routes.js';
 import { SignInCard } from '../modules/auth/components/SignInCard.js';
 import { ThemeToggle } from '../modules/theme/components/ThemeToggle.js';

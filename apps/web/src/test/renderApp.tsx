@@ -1,6 +1,6 @@
 // Renders the whole app at a path with a memory router and a fresh, non-retrying query client.
 import { render } from '@testing-library/react';
-import { createMemoryRouter } from 'react-router';
+import { createMemoryRouter } from 'react-router-dom';
 import { AppProviders } from '../AppProviders.js';
 import { appRoutes } from '../appRoutes.js';
 import { createQueryClient } from '../modules/core/api/createQueryClient.js';

@@ -15,3 +15,4 @@ export * from './measurements.js';
 export * from './outbox-messages.js';
 export * from './simulation-cache.js';
 export * from './yield-jobs.js';
+export * from './yield-chunk-results.js';

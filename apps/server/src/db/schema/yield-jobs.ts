@@ -17,6 +17,8 @@ export const yieldJobs = pgTable(
     status: text('status').$type<YieldJobStatus>().notNull().default('running'),
     runsDone: integer('runs_done').notNull().default(0),
     runsTotal: integer('runs_total').notNull(),
+    /** Chunks the job was split into (the shared queue finishes a job when every chunk has its result). */
+    chunkCount: integer('chunk_count').notNull().default(0),
     summary: jsonb('summary').$type<YieldJob['summary']>(),
     error: text('error'),
     createdBy: uuid('created_by')

@@ -1,7 +1,7 @@
 // One chip of the team: its size and wiring, and its configurations with their review status.
 import { Card, HTMLTable, Spinner, Tag } from '@blueprintjs/core';
 import type { Chip } from '@hexloom/contracts';
-import { Link } from 'react-router';
+import { Link } from 'react-router-dom';
 import { configurationPath } from '../../../routes.js';
 import { ApiErrorCallout } from '../../core/components/ApiErrorCallout.js';
 import { formatDate } from '../../teams/utils/formatDate.js';

@@ -1,7 +1,7 @@
 // "Nothing here" state, for unknown paths and teams the user cannot see.
 import { NonIdealState } from '@blueprintjs/core';
 import type { ReactNode } from 'react';
-import { Link } from 'react-router';
+import { Link } from 'react-router-dom';
 import { ROUTES } from '../../../routes.js';
 
 export type NotFoundStateProps = { title?: string; description?: ReactNode };

@@ -1,5 +1,5 @@
 // Frame of every signed-in page: loads the user, sends strangers to sign-in, draws the navbar.
-import { Outlet, Navigate, useLocation } from 'react-router';
+import { Outlet, Navigate, useLocation } from 'react-router-dom';
 import { signInPath } from '../../../routes.js';
 import { ApiRequestError } from '../../core/api/ApiRequestError.js';
 import { ApiErrorCallout } from '../../core/components/ApiErrorCallout.js';

@@ -1,7 +1,7 @@
 // Top bar of the signed-in app: mark, team switcher, team links, theme toggle, user and sign-out.
 import { Alignment, Button, Navbar } from '@blueprintjs/core';
 import type { Me } from '@hexloom/contracts';
-import { Link, NavLink, useMatch } from 'react-router';
+import { Link, NavLink, useMatch } from 'react-router-dom';
 import { ROUTES, teamHomePath, teamMembersPath } from '../../../routes.js';
 import { useSignOut } from '../../auth/api/useSignOut.js';
 import { HexloomLogo } from '../../brand/components/HexloomLogo.js';

@@ -1,7 +1,7 @@
 // Navbar select to jump between the user's teams (shown only when there are several).
 import { HTMLSelect } from '@blueprintjs/core';
 import type { MyTeam } from '@hexloom/contracts';
-import { useNavigate } from 'react-router';
+import { useNavigate } from 'react-router-dom';
 import { teamHomePath } from '../../../routes.js';
 
 export type TeamSwitcherProps = { teams: readonly MyTeam[]; currentSlug: string | undefined };

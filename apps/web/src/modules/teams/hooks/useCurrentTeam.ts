@@ -1,6 +1,6 @@
 // The team named by the :teamSlug of the URL, among the signed-in user's teams.
 import type { MyTeam } from '@hexloom/contracts';
-import { useParams } from 'react-router';
+import { useParams } from 'react-router-dom';
 import { useMe } from '../../auth/api/useMe.js';
 
 export type CurrentTeam = { teamSlug: string; team: MyTeam | undefined; isLoading: boolean };
