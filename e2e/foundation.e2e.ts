@@ -55,11 +55,12 @@ describe('a demo designer in the browser', () => {
 
   it('opens a configuration and sees the simulated response of its circuit', async () => {
     await page.getByRole('link', { name: 'Interferer notch' }).click();
-    await page.getByTestId('configuration-page').waitFor();
-    await page.getByTestId('response-plot').waitFor({ timeout: 60_000 });
-    const d = (await page.getByTestId('plot-amplitude').locator('path').getAttribute('d')) ?? '';
-    // 801 simulated points, every one finite: one move and 800 line segments.
-    expect(d.match(/L/g)?.length).toBe(800);
+    await page.getByTestId('configuration-workspace').waitFor();
+    const trace = page.getByTestId('trace-0').first();
+    await trace.waitFor({ timeout: 60_000 });
+    // 1,024 simulated points, every one finite: one move and 1,023 line segments.
+    expect(((await trace.getAttribute('d')) ?? '').match(/L/g)?.length).toBe(1023);
+    expect(await page.title()).toContain('Interferer notch');
     await shot('3c-configuration');
     await page.getByTestId('nav-home').click();
     await page.getByTestId('team-home').waitFor();

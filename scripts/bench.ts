@@ -21,6 +21,6 @@ function runBench(workspace: string): Promise<Figure[]> {
 }
 
 const figures: Figure[] = [];
-for (const w of ['libs/mesh', 'libs/solver', 'libs/synth']) figures.push(...(await runBench(w)));
+for (const w of ['libs/mesh', 'libs/solver', 'libs/synth', 'apps/web']) figures.push(...(await runBench(w)));
 const value = (f: Figure): string => (f.value >= 100 ? f.value.toFixed(0) : f.value >= 1 ? f.value.toFixed(1) : f.value.toFixed(3));
 process.stdout.write(`\n## Summary (Node ${process.version}, ${new Date().toISOString().slice(0, 10)})\n\n| library | measure | value |\n| --- | --- | --- |\n${figures.map((f) => `| ${f.library} | ${f.measure} | ${value(f)} ${f.unit} |`).join('\n')}\n`);

@@ -2,6 +2,7 @@
 import type { RouteObject } from 'react-router-dom';
 import { ROUTES } from './routes.js';
 import { AppLayout } from './modules/shell/components/AppLayout.js';
+import { ChipPage } from './pages/ChipPage.js';
 import { ConfigurationPage } from './pages/ConfigurationPage.js';
 import { MembersPage } from './pages/MembersPage.js';
 import { NotFoundPage } from './pages/NotFoundPage.js';
@@ -18,6 +19,7 @@ export const appRoutes: RouteObject[] = [
       { path: ROUTES.root, element: <RootRedirect /> },
       { path: ROUTES.teamHome, element: <TeamHomePage /> },
       { path: ROUTES.teamMembers, element: <MembersPage /> },
+      { path: ROUTES.chip, element: <ChipPage /> },
       { path: ROUTES.configuration, element: <ConfigurationPage /> },
     ],
   },

@@ -6,6 +6,7 @@ export const ROUTES = {
   signIn: '/signin',
   teamHome: '/t/:teamSlug',
   teamMembers: '/t/:teamSlug/members',
+  chip: '/t/:teamSlug/chips/:chipId',
   configuration: '/t/:teamSlug/configurations/:configurationId',
   notFound: '*',
 } as const;
@@ -18,6 +19,11 @@ export function teamHomePath(teamSlug: string): string {
 /** Path of a team's members page. */
 export function teamMembersPath(teamSlug: string): string {
   return `${teamHomePath(teamSlug)}/members`;
+}
+
+/** Path of one chip of a team: its mesh, technology, calibration and dead gates. */
+export function chipPath(teamSlug: string, chipId: string): string {
+  return `${teamHomePath(teamSlug)}/chips/${encodeURIComponent(chipId)}`;
 }
 
 /** Path of one configuration of a team. */

@@ -76,3 +76,5 @@ export { runYieldChunk } from './yield-chunk.js';
 export type { MaskYieldTask, SpecYieldTask, YieldChunkTask } from './yield-chunk.js';
 export { savedFigures, verifySpec } from './verify-spec.js';
 export type { SpecCheck } from './verify-spec.js';
+export { resolveMeshPort, simulateConfiguration } from './simulate-configuration.js';
+export type { PortPair, SimulateConfigurationInput } from './simulate-configuration.js';

@@ -1,22 +1,21 @@
 /** Solver work on a version's content as pure functions of plain data: spectra, mask checks, S-matrices, transmissions. */
 import type { ConfigurationFile, FrequencyGridBody, MaskCheckAnswer, MaskCheckBody, SimulateBody, SpectrumFile } from '@hexloom/contracts';
-import { gridOffsetsHz, netlistFromMesh, simulateConnection, sMatrix, type SMatrix, toSpectrumFile, unitDelayS } from '@hexloom/solver';
-import { checkMask, responseFigures, simulateTransmission, type Transmission } from '@hexloom/synth';
+import { gridOffsetsHz, netlistFromMesh, sMatrix, type SMatrix, unitDelayS } from '@hexloom/solver';
+import { checkMask, responseFigures, simulateConfiguration, simulateTransmission, type Transmission } from '@hexloom/synth';
 import { buildChipMesh } from '../chips/build-chip-mesh.js';
 import { resolvePort } from './resolve-port.js';
 
 /** Unit-delay steps a server impulse run may take: a loop that decays slower is answered with the solver's warning. */
 export const SERVER_MAX_IMPULSE_STEPS = 20_000;
 
-/** The spectrum file of `body.from` -> `body.to` on `body.grid`, ports named by the chip's labels. */
+/** The spectrum file of `body.from` -> `body.to` on `body.grid`, ports named by the chip's labels (the browser's worker runs the same function). */
 export function simulateSpectrum(content: ConfigurationFile, body: SimulateBody): SpectrumFile {
   const mesh = buildChipMesh(content.mesh);
-  const from = resolvePort(mesh, body.from, 'from');
-  const to = resolvePort(mesh, body.to, 'to');
-  const chip = netlistFromMesh({ mesh, configuration: content });
-  const result = simulateConnection(chip.netlist, { from, to, grid: body.grid, unitDelayS: chip.unitDelayS, referenceFrequencyHz: chip.referenceFrequencyHz, impulse: { maxSteps: SERVER_MAX_IMPULSE_STEPS } });
-  const name = (id: string) => mesh.ports[mesh.portIndex.get(id) ?? -1]?.label ?? id;
-  return toSpectrumFile(result, { from: name(from), to: name(to) }) as SpectrumFile;
+  // Resolved here first so an unknown port is the server's 422 naming the body field.
+  const pair = { from: resolvePort(mesh, body.from, 'from'), to: resolvePort(mesh, body.to, 'to') };
+  const [spectrum] = simulateConfiguration({ content, mesh, pairs: [pair], grid: body.grid, maxImpulseSteps: SERVER_MAX_IMPULSE_STEPS });
+  if (!spectrum) throw new Error('simulateSpectrum: the solver answered no spectrum');
+  return spectrum;
 }
 
 /** Offsets (Hz from f0) of a grid on this chip. */

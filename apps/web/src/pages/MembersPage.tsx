@@ -6,10 +6,12 @@ import { PendingInvitations } from '../modules/teams/components/PendingInvitatio
 import { RoleTag } from '../modules/teams/components/RoleTag.js';
 import { TeamMembersSection } from '../modules/teams/components/TeamMembersSection.js';
 import { useCurrentTeam } from '../modules/teams/hooks/useCurrentTeam.js';
+import { useDocumentTitle } from '../modules/core/hooks/useDocumentTitle.js';
 
 /** Members table for everyone; invite form and pending invitations for owners. */
 export function MembersPage() {
   const { teamSlug, team, isLoading } = useCurrentTeam();
+  useDocumentTitle(team ? `Members of ${team.name}` : 'Members');
   if (isLoading) return <PageSpinner />;
   if (!team) return <NotFoundState title="Team not found" description={`You are not a member of a team called "${teamSlug}".`} />;
   return (

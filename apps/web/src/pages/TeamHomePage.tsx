@@ -4,10 +4,12 @@ import { PageSpinner } from '../modules/core/components/PageSpinner.js';
 import { RoleTag } from '../modules/teams/components/RoleTag.js';
 import { ChipsOverview } from '../modules/chips/components/ChipsOverview.js';
 import { useCurrentTeam } from '../modules/teams/hooks/useCurrentTeam.js';
+import { useDocumentTitle } from '../modules/core/hooks/useDocumentTitle.js';
 
 /** Team name, the user's role, and the team's chips with their configurations (or what to do first). */
 export function TeamHomePage() {
   const { teamSlug, team, isLoading } = useCurrentTeam();
+  useDocumentTitle(team?.name ?? 'Team');
   if (isLoading) return <PageSpinner />;
   if (!team) return <NotFoundState title="Team not found" description={`You are not a member of a team called "${teamSlug}".`} />;
   return (

@@ -1,21 +1,25 @@
-// One chip of the team: its size and wiring, and its configurations with their review status.
+// One chip of the team: its size and wiring (its name links to the chip page), and its configurations with their review status.
 import { Card, HTMLTable, Spinner, Tag } from '@blueprintjs/core';
 import type { Chip } from '@hexloom/contracts';
 import { Link } from 'react-router-dom';
-import { configurationPath } from '../../../routes.js';
+import { chipPath, configurationPath } from '../../../routes.js';
 import { ApiErrorCallout } from '../../core/components/ApiErrorCallout.js';
 import { formatDate } from '../../teams/utils/formatDate.js';
 import { useChipConfigurations } from '../api/useChipConfigurations.js';
 import { describeShape } from '../utils/describeShape.js';
 import { StatusTag } from './StatusTag.js';
+import './chips.css';
 
+/** A card per chip: name linking to its page, size, ports, technology summary, calibration tag and configurations table. */
 export function ChipCard({ chip, teamId, teamSlug }: { chip: Chip; teamId: string; teamSlug: string }) {
   const configurations = useChipConfigurations(teamId, chip.id);
   const tech = chip.definition.technology;
   return (
     <Card className="hx-chip-card" data-testid="chip-card">
       <header className="hx-chip-header">
-        <h2>{chip.name}</h2>
+        <h3>
+          <Link to={chipPath(teamSlug, chip.id)}>{chip.name}</Link>
+        </h3>
         <span className="hx-muted">
           {describeShape(chip.definition.shape)} · {chip.definition.ports.length} ports · {tech.unitLengthUm} µm units · {tech.lossPerGateDb} dB per gate
         </span>

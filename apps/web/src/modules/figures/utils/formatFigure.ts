@@ -1,7 +1,9 @@
 // Figures in words and units ("Insertion loss 17.98 dB", "3 dB bandwidth 1.29 GHz"), from the shared figure catalogue.
-import { FIGURE_CATALOGUE, VERDICT_FIGURES, type FigureDefinition, type FigureUnit } from '@hexloom/contracts';
+import { FIGURE_CATALOGUE, VERDICT_FIGURES, type FigureDefinition, type FigureUnit, type FilterSpecKind } from '@hexloom/contracts';
 
-const DEFINITIONS = new Map<string, FigureDefinition>([...Object.values(FIGURE_CATALOGUE).flat(), ...VERDICT_FIGURES].map((d) => [d.name, d]));
+/** The first definition of each name over every kind (a name's unit is the same in every kind). */
+const DEFINITIONS = new Map<string, FigureDefinition>();
+for (const d of [...Object.values(FIGURE_CATALOGUE).flat(), ...VERDICT_FIGURES]) if (!DEFINITIONS.has(d.name)) DEFINITIONS.set(d.name, d);
 
 /** A figure ready to show: a sentence-case label and the value with its unit. */
 export type FormattedFigure = { name: string; label: string; text: string };
@@ -11,7 +13,7 @@ export function formatNumber(value: number, digits = 4): string {
   if (!Number.isFinite(value)) return value > 0 ? '∞' : value < 0 ? '−∞' : '—';
   if (value === 0) return '0';
   const magnitude = Math.floor(Math.log10(Math.abs(value)));
-  const decimals = Math.max(0, Math.min(6, digits - 1 - magnitude));
+  const decimals = Math.max(0, Math.min(12, digits - 1 - magnitude));
   return value.toLocaleString('en-GB', { minimumFractionDigits: 0, maximumFractionDigits: decimals }).replace('-', '−');
 }
 
@@ -29,10 +31,13 @@ export function formatQuantity(value: number, unit: FigureUnit | 'ps/GHz' | '%' 
   return `${formatNumber(value)} ${unit}`;
 }
 
-/** `insertionLossDb`, `bandwidthHz@E09`... -> "Insertion loss at the carrier (E09)" and "17.98 dB". */
-export function formatFigure(name: string, value: number): FormattedFigure {
+/**
+ * `insertionLossDb`, `bandwidthHz@E09`... -> "Insertion loss at the carrier (E09)" and "17.98 dB"; with the spec's
+ * `kind`, the label is that kind's own wording.
+ */
+export function formatFigure(name: string, value: number, kind?: FilterSpecKind): FormattedFigure {
   const [base = name, port] = name.split('@');
-  const definition = DEFINITIONS.get(base);
+  const definition = (kind ? FIGURE_CATALOGUE[kind].find((d) => d.name === base) : undefined) ?? DEFINITIONS.get(base);
   const words = definition?.label ?? base.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase();
   const label = `${words.charAt(0).toUpperCase()}${words.slice(1)}${port ? ` (${port})` : ''}`;
   const unit: FigureUnit = definition?.unit ?? (/Hz$/.test(base) ? 'Hz' : /Db$/.test(base) ? 'dB' : /Ps$/.test(base) ? 'ps' : 'count');

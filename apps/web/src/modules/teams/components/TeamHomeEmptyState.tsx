@@ -22,8 +22,7 @@ export function TeamHomeEmptyState() {
             </li>
           </ol>
           <p className="hx-muted">
-            Chips are described with <code>npx hexloom mesh</code> and imported through the API (<code>/api/docs</code>); creating them on this
-            page comes with a later release.
+            Start with <strong>New chip</strong>: a rectangle or hexagon of cells, or a chip file described with <code>npx hexloom mesh</code>.
           </p>
         </div>
       }
