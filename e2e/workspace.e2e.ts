@@ -106,5 +106,9 @@ describe('a designer in the configuration workspace', () => {
     await page.getByRole('tab', { name: /Versions/ }).click();
     expect(await page.getByTestId('version-3').textContent()).toContain('second-order band-pass next to the notch');
     await shot('7-saved');
+    await page.getByRole('tab', { name: 'Design' }).click();
+    await page.setViewportSize({ width: 1920, height: 1080 });
+    await trace().waitFor({ timeout: 60_000 });
+    await shot('8-wide');
   });
 });

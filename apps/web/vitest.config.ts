@@ -11,5 +11,7 @@ export default defineConfig({
     environment: 'jsdom',
     setupFiles: ['./src/test/setup.ts'],
     passWithNoTests: false,
+    // jsdom renders the whole canvas and runs the solver in-thread: slow on a busy 2-core machine.
+    testTimeout: 30_000,
   },
 });

@@ -13,6 +13,8 @@ import { createBrowserRouter } from 'react-router-dom';
 import { AppProviders } from './AppProviders.js';
 import { appRoutes } from './appRoutes.js';
 import { createQueryClient } from './modules/core/api/createQueryClient.js';
+import { showErrorToast } from './modules/core/utils/appToaster.js';
+import { describeError } from './modules/core/utils/describeError.js';
 import { ROUTES, signInPath } from './routes.js';
 
 const router = createBrowserRouter(appRoutes);
@@ -21,6 +23,7 @@ const queryClient = createQueryClient({
     const { pathname, search } = router.state.location;
     if (pathname !== ROUTES.signIn) void router.navigate(signInPath(`${pathname}${search}`), { replace: true });
   },
+  onMutationError: (error, retry) => showErrorToast(describeError(error), retry),
 });
 
 const container = document.getElementById('root');

@@ -136,11 +136,11 @@ describe('ChipPage', () => {
     fireEvent.click(screen.getByRole('tab', { name: /Dead gates/ }));
     fireEvent.click(screen.getByRole('button', { name: 'gate g(0,0)e, idle' }));
     expect(await violations()).toEqual([]);
-  }, 30_000);
+  }, 120_000);
 
   it('says so when the chip is not in the team', async () => {
     mockApi({ 'GET /api/me': { body: demoMe('noor', 'designer') } });
     renderApp(PAGE);
-    expect((await screen.findByTestId('not-found')).textContent).toContain('Chip not found');
+    expect((await screen.findByTestId('not-found', {}, { timeout: 10_000 })).textContent).toContain('Chip not found');
   });
 });

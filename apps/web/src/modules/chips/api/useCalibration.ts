@@ -10,6 +10,7 @@ import { chipQueryKeys } from './chipQueryKeys.js';
 export function useCalibration(teamId: string, chipId: string) {
   return useQuery({
     queryKey: chipQueryKeys.calibration(teamId, chipId),
+    enabled: teamId !== '' && chipId !== '',
     queryFn: async ({ signal }): Promise<Calibration | null> => {
       try {
         return await apiFetch(chipPaths(teamId, chipId, 'calibration'), calibrationSchema, { signal });

@@ -79,7 +79,7 @@ describe('NewChipDialog', () => {
     expect(await violations()).toEqual([]);
     fireEvent.click(screen.getByLabelText('A chip JSON file'));
     expect(await violations()).toEqual([]);
-  }, 30_000);
+  }, 120_000);
 
   it('uploads a chip JSON file to the import route', async () => {
     const calls = mockApi(routes('designer'));

@@ -37,7 +37,8 @@ describe('apiFetch', () => {
     expect(error).toBeInstanceOf(ApiRequestError);
     expect(error.statusCode).toBe(502);
     expect(error.issues).toEqual([]);
-    expect(error.message).toContain('GET /api/me');
+    expect(error.message).toBe('The server failed (502 Bad Gateway) without saying why. Try again in a moment.');
+    expect(error.request).toBe('GET /api/me');
   });
 
   it('parses a 2xx answer through the contract schema and sends JSON with the session cookie', async () => {

@@ -44,7 +44,7 @@ export async function apiFetch<T>(path: string, schema?: ResponseSchema<T>, opti
     throw new ApiRequestError({
       statusCode: response.status,
       error: response.statusText || 'Error',
-      message: `HTTP ${response.status} from ${request}`,
+      message: response.status >= 500 ? `The server failed (${response.status}${response.statusText ? ` ${response.statusText}` : ''}) without saying why. Try again in a moment.` : `The server refused the request (${response.status}${response.statusText ? ` ${response.statusText}` : ''}) without saying why.`,
       request,
     });
   }
