@@ -6,12 +6,14 @@ import { ApiResponseError } from './ApiResponseError.js';
 /** Anything with a zod-like `parse` (the schemas of @hexloom/contracts). */
 export type ResponseSchema<T> = { parse(data: unknown): T };
 
-export type HttpMethod = 'GET' | 'POST' | 'PATCH' | 'DELETE';
+export type HttpMethod = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 export type ApiFetchOptions = {
   method?: HttpMethod;
   /** Sent as JSON. */
   body?: unknown;
+  /** Sent as multipart/form-data instead of `body` (file uploads; the browser sets the boundary). */
+  form?: FormData;
   signal?: AbortSignal;
 };
 
@@ -28,7 +30,9 @@ export async function apiFetch<T>(path: string, schema?: ResponseSchema<T>, opti
   const request = `${method} ${path}`;
   const headers: Record<string, string> = { accept: 'application/json' };
   const init: RequestInit = { method, headers, credentials: 'same-origin' };
-  if (options.body !== undefined) {
+  if (options.form !== undefined) {
+    init.body = options.form;
+  } else if (options.body !== undefined) {
     headers['content-type'] = 'application/json';
     init.body = JSON.stringify(options.body);
   }
