@@ -1,7 +1,7 @@
 // A circuit's figures in words and units ("Insertion loss at the carrier 17.98 dB"), never raw field names.
 import { Tag } from '@blueprintjs/core';
 import type { FilterSpecKind } from '@hexloom/contracts';
-import { formatFigure } from '../../figures/utils/formatFigure.js';
+import { FigureDefinitions } from '../../figures/components/FigureDefinitions.js';
 
 const VERDICT = new Set(['checks', 'failedChecks']);
 
@@ -17,19 +17,7 @@ export function FiguresList({ figures, title, kind }: { figures: Record<string, 
           {failed === 0 ? `All ${checks} mask and target checks pass` : `${failed} of ${checks} mask and target checks failed`}
         </Tag>
       )}
-      <dl className="hx-figures hx-figures-panel" data-testid="circuit-figures">
-        {Object.entries(figures)
-          .filter(([name]) => !VERDICT.has(name))
-          .map(([name, value]) => {
-            const f = formatFigure(name, value, kind);
-            return (
-              <div key={name}>
-                <dt>{f.label}</dt>
-                <dd className="hx-mono">{f.text}</dd>
-              </div>
-            );
-          })}
-      </dl>
+      <FigureDefinitions figures={Object.fromEntries(Object.entries(figures).filter(([name]) => !VERDICT.has(name)))} kind={kind} className="hx-figures hx-figures-panel" testId="circuit-figures" />
     </section>
   );
 }

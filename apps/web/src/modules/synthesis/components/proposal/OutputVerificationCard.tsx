@@ -2,7 +2,7 @@
 import { Card, HTMLTable, Tag } from '@blueprintjs/core';
 import type { FilterSpecKind, OutputVerification } from '@hexloom/contracts';
 import { formatFrequencyHz, formatQuantity } from '../../../figures/utils/formatFigure.js';
-import { formatFigure } from '../../../figures/utils/formatFigure.js';
+import { FigureDefinitions } from '../../../figures/components/FigureDefinitions.js';
 
 const CHECK_KINDS = { pass: 'Pass band', stop: 'Stop band', delay: 'Group delay', target: 'Spec target' } as const;
 
@@ -51,17 +51,7 @@ export function OutputVerificationCard({ output, kind }: { output: OutputVerific
           </HTMLTable>
         </div>
       )}
-      <dl className="hx-figures">
-        {Object.entries(output.figures).map(([name, value]) => {
-          const figure = formatFigure(name, value, kind);
-          return (
-            <div key={name}>
-              <dt>{figure.label}</dt>
-              <dd className="hx-mono">{figure.text}</dd>
-            </div>
-          );
-        })}
-      </dl>
+      <FigureDefinitions figures={output.figures} kind={kind} />
     </Card>
   );
 }
