@@ -6,6 +6,7 @@ import { ChipPage } from './pages/ChipPage.js';
 import { ConfigurationPage } from './pages/ConfigurationPage.js';
 import { MembersPage } from './pages/MembersPage.js';
 import { NotFoundPage } from './pages/NotFoundPage.js';
+import { OutboxPage } from './pages/OutboxPage.js';
 import { RootRedirect } from './pages/RootRedirect.js';
 import { SignInPage } from './pages/SignInPage.js';
 import { TeamHomePage } from './pages/TeamHomePage.js';
@@ -19,6 +20,7 @@ export const appRoutes: RouteObject[] = [
       { path: ROUTES.root, element: <RootRedirect /> },
       { path: ROUTES.teamHome, element: <TeamHomePage /> },
       { path: ROUTES.teamMembers, element: <MembersPage /> },
+      { path: ROUTES.teamOutbox, element: <OutboxPage /> },
       { path: ROUTES.chip, element: <ChipPage /> },
       { path: ROUTES.configuration, element: <ConfigurationPage /> },
     ],

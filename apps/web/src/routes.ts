@@ -6,6 +6,7 @@ export const ROUTES = {
   signIn: '/signin',
   teamHome: '/t/:teamSlug',
   teamMembers: '/t/:teamSlug/members',
+  teamOutbox: '/t/:teamSlug/outbox',
   chip: '/t/:teamSlug/chips/:chipId',
   configuration: '/t/:teamSlug/configurations/:configurationId',
   notFound: '*',
@@ -14,6 +15,11 @@ export const ROUTES = {
 /** Path of a team's home page. */
 export function teamHomePath(teamSlug: string): string {
   return `/t/${encodeURIComponent(teamSlug)}`;
+}
+
+/** Path of a team's outbox (the mail the server sent; owners). */
+export function teamOutboxPath(teamSlug: string): string {
+  return `${teamHomePath(teamSlug)}/outbox`;
 }
 
 /** Path of a team's members page. */

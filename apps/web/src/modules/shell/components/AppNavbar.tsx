@@ -2,7 +2,7 @@
 import { Alignment, Button, Navbar } from '@blueprintjs/core';
 import type { Me } from '@hexloom/contracts';
 import { Link, NavLink, useMatch } from 'react-router-dom';
-import { ROUTES, teamHomePath, teamMembersPath } from '../../../routes.js';
+import { ROUTES, teamHomePath, teamMembersPath, teamOutboxPath } from '../../../routes.js';
 import { useSignOut } from '../../auth/api/useSignOut.js';
 import { HexloomLogo } from '../../brand/components/HexloomLogo.js';
 import { ThemeToggle } from '../../theme/components/ThemeToggle.js';
@@ -37,6 +37,11 @@ export function AppNavbar({ me }: { me: Me }) {
             <NavLink to={teamMembersPath(team.slug)} className={linkClass} data-testid="nav-members">
               Members
             </NavLink>
+            {team.role === 'owner' ? (
+              <NavLink to={teamOutboxPath(team.slug)} className={linkClass} data-testid="nav-outbox">
+                Outbox
+              </NavLink>
+            ) : null}
           </>
         ) : null}
       </Navbar.Group>

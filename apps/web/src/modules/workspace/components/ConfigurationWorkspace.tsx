@@ -22,6 +22,7 @@ import { ShortcutsDialog } from './ShortcutsDialog.js';
 import { VersionsTable } from './VersionsTable.js';
 import { WorkspaceResponse } from './WorkspaceResponse.js';
 import { ApiErrorCallout } from '../../core/components/ApiErrorCallout.js';
+import { YieldPanel } from '../../yield/components/YieldPanel.js';
 import '../workspace.css';
 
 type Props = {
@@ -134,6 +135,7 @@ export function ConfigurationWorkspace({ team, detail, version, calibration, onO
           }
         />
         <Tab id="gates" title="Gates" panel={<GateTable content={draft.content} {...(calibration ? { calibration } : {})} onSelectGate={setGateId} />} />
+        <Tab id="yield" title="Yield" panel={<YieldPanel teamId={team.id} configurationId={detail.id} version={version} role={team.role} />} />
         <Tab id="versions" title={`Versions (${detail.versions.length})`} panel={<VersionsTable versions={detail.versions} current={version.number} onOpen={onOpenVersion} />} />
       </Tabs>
       {canEdit && (
