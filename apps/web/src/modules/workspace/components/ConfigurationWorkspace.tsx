@@ -23,6 +23,8 @@ import { VersionsTable } from './VersionsTable.js';
 import { WorkspaceResponse } from './WorkspaceResponse.js';
 import { ApiErrorCallout } from '../../core/components/ApiErrorCallout.js';
 import { YieldPanel } from '../../yield/components/YieldPanel.js';
+import { BenchPanel } from '../../bench/components/BenchPanel.js';
+import { MeasuredPanel } from '../../measured/components/MeasuredPanel.js';
 import '../workspace.css';
 
 type Props = {
@@ -135,6 +137,8 @@ export function ConfigurationWorkspace({ team, detail, version, calibration, onO
           }
         />
         <Tab id="gates" title="Gates" panel={<GateTable content={draft.content} {...(calibration ? { calibration } : {})} onSelectGate={setGateId} />} />
+        <Tab id="bench" title="Bench" panel={<BenchPanel teamId={team.id} configurationId={detail.id} version={version} chipId={detail.chipId} />} />
+        <Tab id="measured" title="Measured" panel={<MeasuredPanel teamId={team.id} configurationId={detail.id} version={version} canUpload={team.role !== 'viewer'} />} />
         <Tab id="yield" title="Yield" panel={<YieldPanel teamId={team.id} configurationId={detail.id} version={version} role={team.role} />} />
         <Tab id="versions" title={`Versions (${detail.versions.length})`} panel={<VersionsTable versions={detail.versions} current={version.number} onOpen={onOpenVersion} />} />
       </Tabs>
