@@ -70,7 +70,7 @@ describe('every page under axe-core', () => {
       await page.getByTestId('gate-table').waitFor();
       await check(`workspace-gates-${theme}`);
       await page.getByRole('tab', { name: /Versions/ }).click();
-      await page.getByTestId('versions-table').waitFor();
+      await page.getByTestId('version-history').waitFor();
       await check(`workspace-versions-${theme}`);
     });
   }

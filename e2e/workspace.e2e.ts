@@ -104,7 +104,7 @@ describe('a designer in the configuration workspace', () => {
     expect(page.url()).toBe(`${workspaceUrl}?v=3`);
     expect(await page.getByTestId('circuits-list').textContent()).toContain('bandpass2');
     await page.getByRole('tab', { name: /Versions/ }).click();
-    expect(await page.getByTestId('version-3').textContent()).toContain('second-order band-pass next to the notch');
+    expect(await page.getByTestId('history-version-3').textContent()).toContain('second-order band-pass next to the notch');
     await shot('7-saved');
     await page.getByRole('tab', { name: 'Design' }).click();
     await page.setViewportSize({ width: 1920, height: 1080 });

@@ -16,7 +16,7 @@ import { auditCount, databaseOf, demoTeamId, startTestApp } from './support/test
 const ACTORS: readonly Actor[] = ['anonymous', 'outsider', 'viewer', 'reviewer', 'designer', 'owner'];
 
 type Ctx = {
-  teamId: string; otherTeamId: string; chipId: string; configurationId: string; jobId: string; measurementId: string;
+  teamId: string; otherTeamId: string; chipId: string; configurationId: string; jobId: string; measurementId: string; commentId: string;
   from: string; to: string; content: Configuration | null; csv: string; measuredCsv: string;
 };
 
@@ -42,7 +42,7 @@ const only = (roles: Actor[], status: number): Record<Actor, number> => {
 describe('team-server route x role matrix', () => {
   let sut: INestApplication;
   const agents = {} as Record<Actor, Agent>;
-  const ctx: Ctx = { teamId: '', otherTeamId: '', chipId: '', configurationId: '', jobId: '', measurementId: '', from: '', to: '', content: null, csv: '', measuredCsv: '' };
+  const ctx: Ctx = { teamId: '', otherTeamId: '', chipId: '', configurationId: '', jobId: '', measurementId: '', commentId: '', from: '', to: '', content: null, csv: '', measuredCsv: '' };
   const db = () => databaseOf(sut);
   const rows = async (table: Table): Promise<number> =>
     (await db().select({ n: count() }).from(table))[0]?.n ?? -1;
@@ -70,6 +70,7 @@ describe('team-server route x role matrix', () => {
     ctx.content = placed.configuration;
     await agents.owner.post(`${cfg(ctx)}/versions`).send({ baseVersion: 1, content: ctx.content }).expect(201);
     await agents.owner.post(`${v2(ctx)}/reviews`).send({ reviewers: ['caspar'] }).expect(201);
+    ctx.commentId = (await agents.owner.post(`${v2(ctx)}/comments`).send({ body: 'thread to resolve' }).expect(201)).body.id as string;
     const f0 = chip.definition.technology.referenceFrequencyHz;
     ctx.measuredCsv = `frequency_hz,amplitude_db\n${f0 - 1e9},-3\n${f0},-3.1\n${f0 + 1e9},-3.2\n`;
     const measured = await agents.owner.post(`${v2(ctx)}/measurements`).field('from', ctx.from).field('to', ctx.to).attach('file', Buffer.from(ctx.measuredCsv), 'm.csv').expect(201);
@@ -147,12 +148,19 @@ describe('team-server route x role matrix', () => {
       table: configurations,
     },
     { route: 'GET .../reviews', call: (a, c) => a.get(`${v2(c)}/reviews`), expected: members(200) },
+    { route: 'GET /reviews/waiting', call: (a, c) => a.get(`/api/teams/${c.teamId}/reviews/waiting`), expected: members(200) },
     { route: 'GET .../comments', call: (a, c) => a.get(`${v2(c)}/comments`), expected: members(200) },
     {
       route: 'POST .../comments',
       call: (a, c) => a.post(`${v2(c)}/comments`).send({ body: 'matrix comment' }),
       expected: only(['reviewer', 'designer', 'owner'], 201),
       table: comments,
+    },
+    {
+      route: 'PATCH .../comments/:commentId',
+      call: (a, c) => a.patch(`${v2(c)}/comments/${c.commentId}`).send({ resolved: true }),
+      expected: only(['reviewer', 'designer', 'owner'], 200),
+      unchanged: async (c) => expect((await db().select({ at: comments.resolvedAt }).from(comments).where(eq(comments.id, c.commentId)))[0]?.at).toBeNull(),
     },
     { route: 'POST .../simulate', call: (a, c) => a.post(`${v2(c)}/simulate`).send({ from: c.from, to: c.to, grid: { kind: 'fsr', points: 64 } }), expected: members(200) },
     {
@@ -241,7 +249,7 @@ describe('team-server route x role matrix', () => {
     const actions = new Set(events.map((e) => e.action));
     for (const action of [
       'chip.created', 'chip.updated', 'calibration.uploaded', 'configuration.created', 'configuration.duplicated', 'version.saved',
-      'review.requested', 'review.decided', 'comment.created', 'measurement.uploaded', 'yield_job.started',
+      'review.requested', 'review.decided', 'comment.created', 'comment.resolved', 'measurement.uploaded', 'yield_job.started',
     ]) {
       expect({ action, recorded: actions.has(action) }).toEqual({ action, recorded: true });
     }

@@ -50,6 +50,8 @@ const ROUTES = [
   'post /api/teams/{teamId}/configurations/{configurationId}/versions/{number}/decision',
   'get /api/teams/{teamId}/configurations/{configurationId}/versions/{number}/comments',
   'post /api/teams/{teamId}/configurations/{configurationId}/versions/{number}/comments',
+  'patch /api/teams/{teamId}/configurations/{configurationId}/versions/{number}/comments/{commentId}',
+  'get /api/teams/{teamId}/reviews/waiting',
   'post /api/teams/{teamId}/configurations/{configurationId}/versions/{number}/simulate',
   'post /api/teams/{teamId}/configurations/{configurationId}/versions/{number}/mask-check',
   'post /api/teams/{teamId}/configurations/{configurationId}/versions/{number}/synthesise',

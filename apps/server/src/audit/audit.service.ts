@@ -24,6 +24,8 @@ export type AuditAction =
   | 'review.requested'
   | 'review.decided'
   | 'comment.created'
+  | 'comment.resolved'
+  | 'comment.reopened'
   | 'measurement.uploaded'
   | 'yield_job.started'
   | 'yield_job.cancelled';

@@ -1,8 +1,8 @@
 /** Review and comment routes of one version. */
-import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
-import { ApiBody, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiParam, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import { Body, Controller, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
+import { ApiBody, ApiCreatedResponse, ApiNotFoundResponse, ApiOkResponse, ApiOperation, ApiParam, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import {
-  type Comment, commentSchema, type CreateComment, createCommentSchema, type RequestReview, requestReviewSchema, type Review, type ReviewDecision, reviewDecisionSchema, reviewSchema, type User, versionNumberParamSchema } from '@hexloom/contracts';
+  type Comment, commentSchema, type CreateComment, createCommentSchema, type RequestReview, requestReviewSchema, type Review, type ReviewDecision, reviewDecisionSchema, reviewSchema, type UpdateComment, updateCommentSchema, type User, versionNumberParamSchema } from '@hexloom/contracts';
 import { z } from 'zod';
 import { CurrentUser } from '../common/current-user.decorator.js';
 import { openApiSchema } from '../common/openapi-schema.js';
@@ -13,6 +13,8 @@ import { ReviewsService } from './reviews.service.js';
 
 const versionParams = z.object({ teamId: z.uuid(), configurationId: z.uuid(), number: versionNumberParamSchema });
 type VersionParams = z.output<typeof versionParams>;
+const commentParams = versionParams.extend({ commentId: z.uuid() });
+type CommentParams = z.output<typeof commentParams>;
 
 /** Under /teams/:teamId/configurations/:configurationId/versions/:number. */
 @ApiTags('reviews')
@@ -71,5 +73,18 @@ export class ReviewsController {
   @ApiCreatedResponse({ schema: openApiSchema(commentSchema) })
   comment(@CurrentUser() user: User, @Param(new ZodValidationPipe(versionParams)) p: VersionParams, @Body(new ZodValidationPipe(createCommentSchema)) body: CreateComment): Promise<Comment> {
     return this.comments.create(user, p.teamId, p.configurationId, p.number, body);
+  }
+
+  @Patch('comments/:commentId')
+  @HttpCode(200)
+  @TeamRoles('owner', 'designer', 'reviewer')
+  @ApiParam({ name: 'commentId', format: 'uuid' })
+  @ApiOperation({ summary: 'Resolve or reopen the thread a comment starts (owners, designers, reviewers)' })
+  @ApiBody({ schema: openApiSchema(updateCommentSchema, 'input') })
+  @ApiOkResponse({ schema: openApiSchema(commentSchema) })
+  @ApiNotFoundResponse({ description: 'No such comment on this version' })
+  @ApiUnprocessableEntityResponse({ description: 'The comment is a reply; resolve the first comment of its thread' })
+  updateComment(@CurrentUser() user: User, @Param(new ZodValidationPipe(commentParams)) p: CommentParams, @Body(new ZodValidationPipe(updateCommentSchema)) body: UpdateComment): Promise<Comment> {
+    return this.comments.update(user, p.teamId, p.configurationId, p.number, p.commentId, body);
   }
 }

@@ -70,7 +70,7 @@ describe('ConfigurationPage', () => {
     const { router } = renderApp(`/t/kestrel-vale/configurations/${DEMO_CONFIGURATION_ID}`);
     await screen.findByTestId('trace-0', {}, { timeout: 10_000 });
     fireEvent.click(screen.getByRole('tab', { name: /Versions/ }));
-    fireEvent.keyDown(await screen.findByTestId('version-1'), { key: 'Enter' });
+    fireEvent.keyDown(await screen.findByTestId('history-version-1'), { key: 'Enter' });
     await waitFor(() => expect(router.state.location.search).toBe('?v=1'));
     await waitFor(() => expect(calls.some((c) => c.key === `GET ${base}/versions/1`)).toBe(true));
   });

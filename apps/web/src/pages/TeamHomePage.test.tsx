@@ -10,7 +10,7 @@ afterEach(() => vi.unstubAllGlobals());
 
 describe('TeamHomePage', () => {
   it('opens the first team from / and shows its name, the role, the next steps and, for a designer, New chip', async () => {
-    mockApi({ 'GET /api/me': { body: demoMe('noor', 'designer') }, [`GET /api/teams/${DEMO_TEAM_ID}/chips`]: { body: [] } });
+    mockApi({ 'GET /api/me': { body: demoMe('noor', 'designer') }, [`GET /api/teams/${DEMO_TEAM_ID}/chips`]: { body: [] }, [`GET /api/teams/${DEMO_TEAM_ID}/reviews/waiting`]: { body: [] } });
     const { router } = renderApp('/');
     const home = await screen.findByTestId('team-home');
     expect(router.state.location.pathname).toBe('/t/kestrel-vale');

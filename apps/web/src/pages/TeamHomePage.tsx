@@ -5,8 +5,10 @@ import { RoleTag } from '../modules/teams/components/RoleTag.js';
 import { ChipsOverview } from '../modules/chips/components/ChipsOverview.js';
 import { useCurrentTeam } from '../modules/teams/hooks/useCurrentTeam.js';
 import { useDocumentTitle } from '../modules/core/hooks/useDocumentTitle.js';
+import { RecentActivity } from '../modules/activity/components/RecentActivity.js';
+import { WaitingForMyReview } from '../modules/versions/components/WaitingForMyReview.js';
 
-/** Team name, the user's role, and the team's chips with their configurations (or what to do first). */
+/** Team name, the user's role, the team's chips with their configurations (or what to do first), reviews waiting and, for owners, recent activity. */
 export function TeamHomePage() {
   const { teamSlug, team, isLoading } = useCurrentTeam();
   useDocumentTitle(team?.name ?? 'Team');
@@ -20,7 +22,13 @@ export function TeamHomePage() {
           your role <RoleTag role={team.role} />
         </span>
       </header>
-      <ChipsOverview teamId={team.id} teamSlug={team.slug} />
+      <div className="hx-team-home">
+        <ChipsOverview teamId={team.id} teamSlug={team.slug} />
+        <aside className="hx-stack" aria-label="For you">
+          <WaitingForMyReview teamId={team.id} teamSlug={team.slug} />
+          {team.role === 'owner' && <RecentActivity teamId={team.id} />}
+        </aside>
+      </div>
     </div>
   );
 }

@@ -6,6 +6,7 @@ export * from './version-diff.js';
 export * from './compute.js';
 export * from './yield-job.js';
 export * from './review.js';
+export * from './review-waiting.js';
 export * from './measurement.js';
 export * from './bench-export.js';
 export * from './outbox.js';

@@ -34,7 +34,7 @@ export const commentAnchorSchema = z.union([
 ]);
 export type CommentAnchor = z.infer<typeof commentAnchorSchema>;
 
-/** POST .../comments body; `@login` in the text mails that member. */
+/** POST .../comments body; `@login` of a team member in the text mails that member. */
 export const createCommentSchema = z.object({
   body: z.string().trim().min(1).max(5000),
   parentId: z.uuid().optional(),
@@ -42,6 +42,14 @@ export const createCommentSchema = z.object({
 });
 export type CreateComment = z.infer<typeof createCommentSchema>;
 
+/** PATCH .../comments/:commentId body: resolve (true) or reopen (false) the thread this comment starts. */
+export const updateCommentSchema = z.object({ resolved: z.boolean() }).strict();
+export type UpdateComment = z.infer<typeof updateCommentSchema>;
+
+/**
+ * A comment as the server answers it. `mentions` are the team members named as `@login` in the body (parsed by the
+ * server when the comment was written); `resolvedAt`/`resolvedBy` are set on a thread's first comment once resolved.
+ */
 export const commentSchema = z.object({
   id: z.uuid(),
   versionNumber: z.number().int().positive(),
@@ -49,6 +57,9 @@ export const commentSchema = z.object({
   author: z.string(),
   body: z.string(),
   anchor: commentAnchorSchema.nullable(),
+  mentions: z.array(z.string()),
   createdAt: z.string(),
+  resolvedAt: z.string().nullable(),
+  resolvedBy: z.string().nullable(),
 });
 export type Comment = z.infer<typeof commentSchema>;

@@ -4,7 +4,7 @@ import { type AnyPgColumn, index, jsonb, pgTable, text, timestamp, uuid } from '
 import { configurationVersions } from './configuration-versions.js';
 import { users } from './users.js';
 
-/** `parent_id` threads a reply under another comment of the same version. */
+/** `parent_id` threads a reply under another comment of the same version; `resolved_at`/`resolved_by` mark a thread resolved. */
 export const comments = pgTable(
   'comments',
   {
@@ -19,6 +19,8 @@ export const comments = pgTable(
     body: text('body').notNull(),
     anchor: jsonb('anchor').$type<CommentAnchor>(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    resolvedAt: timestamp('resolved_at', { withTimezone: true }),
+    resolvedBy: uuid('resolved_by').references(() => users.id),
   },
   (t) => [index('comments_version_idx').on(t.versionId, t.createdAt)],
 );

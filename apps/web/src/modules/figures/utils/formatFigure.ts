@@ -1,9 +1,15 @@
 // Figures in words and units ("Insertion loss 17.98 dB", "3 dB bandwidth 1.29 GHz"), from the shared figure catalogue.
 import { FIGURE_CATALOGUE, VERDICT_FIGURES, type FigureDefinition, type FigureUnit, type FilterSpecKind } from '@hexloom/contracts';
 
+/** Figures of a whole response that no spec kind lists (Monte Carlo studies quote them). */
+const RESPONSE_FIGURES: FigureDefinition[] = [
+  { name: 'worstMarginDb', unit: 'dB', label: 'worst mask margin' },
+  { name: 'peakFrequencyHz', unit: 'Hz', label: 'frequency of the highest transmission' },
+];
+
 /** The first definition of each name over every kind (a name's unit is the same in every kind). */
 const DEFINITIONS = new Map<string, FigureDefinition>();
-for (const d of [...Object.values(FIGURE_CATALOGUE).flat(), ...VERDICT_FIGURES]) if (!DEFINITIONS.has(d.name)) DEFINITIONS.set(d.name, d);
+for (const d of [...Object.values(FIGURE_CATALOGUE).flat(), ...VERDICT_FIGURES, ...RESPONSE_FIGURES]) if (!DEFINITIONS.has(d.name)) DEFINITIONS.set(d.name, d);
 
 /** A figure ready to show: a sentence-case label and the value with its unit. */
 export type FormattedFigure = { name: string; label: string; text: string };

@@ -16,6 +16,10 @@ export type MeshCanvasProps = {
   onGateClick?: (gateId: string) => void;
   /** Halo every circuit's gates and ring its ports in the circuit's colour (default true). */
   highlightCircuits?: boolean;
+  /** Gates to mark with an extra outline (e.g. the gates two versions set differently); named in the legend. */
+  highlightGateIds?: readonly string[];
+  /** What the marked gates are, for the legend and each gate's description (default "Highlighted gate"). */
+  highlightLabel?: string;
   /** Height of the drawing in CSS pixels (default 480); the width follows the container. */
   height?: number;
   ariaLabel?: string;
@@ -26,7 +30,7 @@ export type MeshCanvasProps = {
  * dead), ports at the mesh edge with the chip's labels and wiring, a legend, d3-zoom pan and zoom and the
  * keyboard shortcuts of `MESH_CANVAS_SHORTCUTS`. A definition that does not build is reported in words.
  */
-export function MeshCanvas({ definition, configuration, selectedGateId, onGateClick, highlightCircuits = true, height = 480, ariaLabel }: MeshCanvasProps) {
+export function MeshCanvas({ definition, configuration, selectedGateId, onGateClick, highlightCircuits = true, highlightGateIds, highlightLabel = 'Highlighted gate', height = 480, ariaLabel }: MeshCanvasProps) {
   const built = useMemo((): { mesh: Mesh } | { error: string } => {
     try {
       return { mesh: buildMesh(definition) };
@@ -49,6 +53,8 @@ export function MeshCanvas({ definition, configuration, selectedGateId, onGateCl
       selectedGateId={selectedGateId}
       onGateClick={onGateClick}
       highlightCircuits={highlightCircuits}
+      highlightGateIds={highlightGateIds}
+      highlightLabel={highlightLabel}
       height={height}
       ariaLabel={ariaLabel ?? `Mesh of ${definition.name}`}
     />

@@ -17,6 +17,8 @@ export type MeshCanvasViewProps = {
   selectedGateId: string | undefined;
   onGateClick: ((gateId: string) => void) | undefined;
   highlightCircuits: boolean;
+  highlightGateIds?: readonly string[] | undefined;
+  highlightLabel?: string | undefined;
   height: number;
   ariaLabel: string;
 };
@@ -28,7 +30,7 @@ const ZOOM_STEP = 1.25;
 const tipOf = (target: EventTarget): Element | null => (target as Element).closest?.('[data-tooltip]') ?? null;
 
 /** See MeshCanvas; this part assumes the mesh built. */
-export function MeshCanvasView({ mesh, configuration, selectedGateId, onGateClick, highlightCircuits, height, ariaLabel }: MeshCanvasViewProps) {
+export function MeshCanvasView({ mesh, configuration, selectedGateId, onGateClick, highlightCircuits, highlightGateIds, highlightLabel = 'Highlighted gate', height, ariaLabel }: MeshCanvasViewProps) {
   const wrapperRef = useRef<HTMLDivElement>(null);
   const svgRef = useRef<SVGSVGElement>(null);
   const layerRef = useRef<SVGGElement>(null);
@@ -38,6 +40,7 @@ export function MeshCanvasView({ mesh, configuration, selectedGateId, onGateClic
   const circuits = useMemo(() => (highlightCircuits ? (configuration?.circuits ?? []) : []), [highlightCircuits, configuration]);
   const circuitPorts = useMemo(() => new Map(circuits.flatMap((c, index) => c.ports.map((p) => [p, { index, circuit: c.id }] as const))), [circuits]);
   const wirings = useMemo(() => new Set(mesh.ports.map((p) => p.wiredTo)), [mesh]);
+  const marked = useMemo(() => new Set(highlightGateIds ?? []), [highlightGateIds]);
   const view = useMeshZoom(svgRef, layerRef, layout.bounds, width, height);
   const [tip, setTip] = useState<Tip | null>(null);
 
@@ -92,7 +95,7 @@ export function MeshCanvasView({ mesh, configuration, selectedGateId, onGateClic
                 <polygon key={c.id} className="hx-mesh-cell" points={c.points} />
               ))}
             </g>
-            <MeshGates gates={layout.gates} looks={looks} side={layout.side} selectedGateId={selectedGateId} onGateClick={onGateClick} highlightCircuits={highlightCircuits} />
+            <MeshGates gates={layout.gates} looks={looks} side={layout.side} selectedGateId={selectedGateId} onGateClick={onGateClick} highlightCircuits={highlightCircuits} markedGateIds={marked} markLabel={highlightLabel} />
             <MeshPorts ports={layout.ports} side={layout.side} circuitPorts={circuitPorts} />
           </g>
         </svg>
@@ -102,7 +105,7 @@ export function MeshCanvasView({ mesh, configuration, selectedGateId, onGateClic
           </div>
         )}
       </div>
-      <MeshLegend circuits={circuits} wirings={wirings} unitLengthUm={mesh.definition.technology.unitLengthUm} />
+      <MeshLegend circuits={circuits} wirings={wirings} unitLengthUm={mesh.definition.technology.unitLengthUm} {...(marked.size > 0 ? { markLabel: `${highlightLabel} (${marked.size})` } : {})} />
     </div>
   );
 }

@@ -13,6 +13,9 @@ export type MeshGatesProps = {
   selectedGateId?: string | undefined;
   onGateClick?: ((gateId: string) => void) | undefined;
   highlightCircuits: boolean;
+  /** Gates drawn with an extra outline and described with `markLabel`. */
+  markedGateIds?: ReadonlySet<string> | undefined;
+  markLabel?: string | undefined;
 };
 
 const gateOf = (target: EventTarget): string | undefined => (target as Element).closest?.('[data-gate-id]')?.getAttribute('data-gate-id') ?? undefined;
@@ -21,7 +24,7 @@ const gateOf = (target: EventTarget): string | undefined => (target as Element).
  * Every gate as `<g data-gate-id class="hx-mesh-gate hx-mesh-gate--<state>">` named "gate g(0,1)e, bar", with the details
  * (coupling, parked state, circuits) as its description; buttons (Enter, Space, click) when `onGateClick` is given.
  */
-export const MeshGates = memo(function MeshGates({ gates, looks, side, selectedGateId, onGateClick, highlightCircuits }: MeshGatesProps) {
+export const MeshGates = memo(function MeshGates({ gates, looks, side, selectedGateId, onGateClick, highlightCircuits, markedGateIds, markLabel }: MeshGatesProps) {
   const clickable = onGateClick !== undefined;
   const descriptionPrefix = useId();
   const onClick = (event: MouseEvent) => {
@@ -42,14 +45,16 @@ export const MeshGates = memo(function MeshGates({ gates, looks, side, selectedG
         const look = looks.get(id) ?? { state: 'idle', circuits: [], circuitIndex: null };
         const descriptionId = `${descriptionPrefix}${id}`;
         const selected = id === selectedGateId;
+        const marked = markedGateIds?.has(id) === true;
         const { from, to } = segment;
         const mid = segmentMidpoint(segment);
         const ends = { x1: from.x, y1: from.y, x2: to.x, y2: to.y };
         return (
           <g
             key={id}
-            className={`hx-mesh-gate hx-mesh-gate--${look.state}${selected ? ' hx-mesh-gate--selected' : ''}`}
+            className={`hx-mesh-gate hx-mesh-gate--${look.state}${selected ? ' hx-mesh-gate--selected' : ''}${marked ? ' hx-mesh-gate--marked' : ''}`}
             data-gate-id={id}
+            data-marked={marked ? 'true' : undefined}
             data-tooltip={describeGate(id, look)}
             role={clickable ? 'button' : 'img'}
             tabIndex={clickable ? 0 : undefined}
@@ -57,8 +62,9 @@ export const MeshGates = memo(function MeshGates({ gates, looks, side, selectedG
             aria-describedby={descriptionId}
             aria-pressed={clickable && selectedGateId !== undefined ? selected : undefined}
           >
-            <desc id={descriptionId}>{gateDetails(look)}</desc>
+            <desc id={descriptionId}>{marked ? `${markLabel ?? 'Highlighted gate'}. ${gateDetails(look)}` : gateDetails(look)}</desc>
             {selected && <line className="hx-mesh-gate-selection" {...ends} />}
+            {marked && <line className="hx-mesh-gate-mark-outline" {...ends} />}
             {highlightCircuits && look.circuitIndex !== null && (
               <>
                 <line className="hx-mesh-gate-halo" stroke={circuitColour(look.circuitIndex)} {...ends} />

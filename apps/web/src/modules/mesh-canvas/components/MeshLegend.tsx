@@ -13,10 +13,12 @@ export type MeshLegendProps = {
   /** Wirings the chip uses (only those are listed). */
   wirings: ReadonlySet<PortWiring>;
   unitLengthUm: number;
+  /** Names the outlined gates when some are marked ("Changed gate (4)"). */
+  markLabel?: string;
 };
 
 /** A compact legend, `data-testid="mesh-legend"`, with one item per gate state (`data-state`). */
-export function MeshLegend({ circuits, wirings, unitLengthUm }: MeshLegendProps) {
+export function MeshLegend({ circuits, wirings, unitLengthUm, markLabel }: MeshLegendProps) {
   return (
     <div className="hx-mesh-legend" data-testid="mesh-legend">
       <ul aria-label="Gate states">
@@ -30,6 +32,14 @@ export function MeshLegend({ circuits, wirings, unitLengthUm }: MeshLegendProps)
             {CANVAS_GATE_STATE_WORDS[state]}
           </li>
         ))}
+        {markLabel && (
+          <li data-state="marked">
+            <svg width="30" height="14" aria-hidden="true" className="hx-mesh-gate">
+              <line className="hx-mesh-gate-mark-outline" x1="5" y1="7" x2="25" y2="7" />
+            </svg>
+            {markLabel}
+          </li>
+        )}
       </ul>
       {wirings.size > 0 && (
         <ul aria-label="Port wiring">

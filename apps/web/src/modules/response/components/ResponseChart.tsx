@@ -4,6 +4,7 @@ import { type PointerEvent, type RefObject, useEffect, useId, useMemo, useRef } 
 import type { MaskShape } from '../utils/maskShapes.js';
 import type { TraceSeries } from '../utils/traceSeries.js';
 import { MaskOverlay } from './MaskOverlay.js';
+import { CommentBands, type CommentBand } from './CommentBands.js';
 import { PlotAxes } from './PlotAxes.js';
 import { PLOT_AREA, PLOT_HEIGHT, PLOT_WIDTH } from './plotLayout.js';
 
@@ -21,6 +22,8 @@ type Props = {
   onCursor: (xGhz: number | null) => void;
   wavelength?: { toNm: (offsetGhz: number) => number; fromNm: (nm: number) => number };
   svgRef: RefObject<SVGSVGElement | null>;
+  /** Bands review comments point at (shaded). */
+  bands?: readonly CommentBand[] | undefined;
 };
 
 type Point = { x: number; y: number | null };
@@ -35,7 +38,7 @@ function yDomain(series: readonly TraceSeries[], shapes: readonly MaskShape[], x
 }
 
 /** One chart; each trace path is `trace-<index>`, coloured by its index. */
-export function ResponseChart({ series, shapes, xLabel, yLabel, ariaLabel, zoom, onZoom, cursorGhz, onCursor, wavelength, svgRef }: Props) {
+export function ResponseChart({ series, shapes, xLabel, yLabel, ariaLabel, zoom, onZoom, cursorGhz, onCursor, wavelength, svgRef, bands = [] }: Props) {
   const brushLayer = useRef<SVGGElement | null>(null);
   const clipId = `hx-rp-clip-${useId().replace(/[^A-Za-z0-9_-]/g, '')}`;
   const [full0 = 0, full1 = 1] = extent(series.flatMap((s) => s.xGhz));
@@ -92,6 +95,7 @@ export function ResponseChart({ series, shapes, xLabel, yLabel, ariaLabel, zoom,
       <PlotAxes x={x} y={y} xLabel={xLabel} yLabel={yLabel} {...(wavelength ? { wavelength } : {})} />
       <g clipPath={`url(#${clipId})`}>
         <MaskOverlay shapes={shapes} x={x} y={y} />
+        {bands.length > 0 && <CommentBands bands={bands} x={x} />}
         {paths.map((d, i) => (
           <path key={i} className={`hx-rp-trace hx-rp-trace-${i % 6}`} d={d} data-testid={`trace-${i}`} />
         ))}

@@ -30,6 +30,13 @@ describe('ResponsePlots', () => {
     expect(within(screen.getByTestId('plot-legend')).getByText('in → in')).toBeTruthy();
   });
 
+  it("shades the bands review comments point at, with the comment's words on hover", () => {
+    render(<ResponsePlots spectra={spectra} referenceFrequencyHz={ref} bands={[{ fromHz: 1e9, toHz: 2e9, label: 'ripple here?' }]} />);
+    const band = screen.getByTestId('comment-band');
+    expect(Number(band.getAttribute('width'))).toBeGreaterThan(2);
+    expect(band.textContent).toBe('Comment: ripple here?');
+  });
+
   it('switches views and labels the axis in words and units', async () => {
     const user = userEvent.setup();
     render(<ResponsePlots spectra={spectra} referenceFrequencyHz={ref} />);

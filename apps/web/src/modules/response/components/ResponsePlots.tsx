@@ -13,14 +13,15 @@ import { CursorReadout } from './CursorReadout.js';
 import { PlotDownloads } from './PlotDownloads.js';
 import { PlotLegend } from './PlotLegend.js';
 import { ResponseChart } from './ResponseChart.js';
+import type { CommentBand } from './CommentBands.js';
 
 /** Spectra to overlay (one per port pair), the mask to check them against, and the carrier the offsets count from. */
-export type ResponsePlotsProps = { spectra: SpectrumFile[]; mask?: Mask; referenceFrequencyHz: number; title?: string };
+export type ResponsePlotsProps = { spectra: SpectrumFile[]; mask?: Mask; referenceFrequencyHz: number; title?: string; /** Bands review comments point at, shaded on every view. */ bands?: readonly CommentBand[] };
 
 const DECIMALS: Record<PlotView, number> = { transmission: 2, phase: 3, delay: 1, dispersion: 2, rf: 2 };
 
 /** Tabs of views over one chart with a legend, a cursor read-out, drag-to-zoom and downloads. */
-export function ResponsePlots({ spectra, mask, referenceFrequencyHz, title }: ResponsePlotsProps) {
+export function ResponsePlots({ spectra, mask, referenceFrequencyHz, title, bands }: ResponsePlotsProps) {
   const [view, setView] = useState<PlotView>('transmission');
   const [linear, setLinear] = useState(false);
   const [rfScheme, setRfScheme] = useState<RfScheme>('imdd');
@@ -86,6 +87,7 @@ export function ResponsePlots({ spectra, mask, referenceFrequencyHz, title }: Re
         cursorGhz={cursorGhz}
         onCursor={setCursorGhz}
         svgRef={svgRef}
+        bands={bands}
         {...(wavelength ? { wavelength } : {})}
       />
       <div className="hx-rp-foot">

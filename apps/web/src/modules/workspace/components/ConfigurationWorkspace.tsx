@@ -19,10 +19,16 @@ import { GateInspector } from './GateInspector.js';
 import { GateTable } from './GateTable.js';
 import { SaveVersionDialog } from './SaveVersionDialog.js';
 import { ShortcutsDialog } from './ShortcutsDialog.js';
-import { VersionsTable } from './VersionsTable.js';
+import { VersionsPanel } from '../../versions/components/VersionsPanel.js';
 import { WorkspaceResponse } from './WorkspaceResponse.js';
 import { ApiErrorCallout } from '../../core/components/ApiErrorCallout.js';
 import { YieldPanel } from '../../yield/components/YieldPanel.js';
+import { ReviewPanel } from '../../review/components/ReviewPanel.js';
+import { useComments } from '../../review/api/useComments.js';
+import { gatePins } from '../../review/utils/gatePins.js';
+import { bandShades } from '../../review/utils/bandShades.js';
+import { useTeamMembers } from '../../teams/api/useTeamMembers.js';
+import { useMe } from '../../auth/api/useMe.js';
 import { BenchPanel } from '../../bench/components/BenchPanel.js';
 import { MeasuredPanel } from '../../measured/components/MeasuredPanel.js';
 import '../workspace.css';
@@ -46,6 +52,11 @@ export function ConfigurationWorkspace({ team, detail, version, calibration, onO
   const [drawerOpen, setDrawerOpen] = useState(false);
   const [saveOpen, setSaveOpen] = useState(false);
   const [helpOpen, setHelpOpen] = useState(false);
+  const me = useMe();
+  const members = useTeamMembers(team.id);
+  const comments = useComments(team.id, detail.id, version.number);
+  const commentBands = useMemo(() => bandShades(comments.data ?? []).map((b) => ({ fromHz: b.fromHz, toHz: b.toHz, label: comments.data?.find((c) => c.id === b.commentId)?.body ?? '' })), [comments.data]);
+  const pinnedGates = useMemo(() => gatePins(comments.data ?? []).filter((p) => !p.resolved).map((p) => p.gateId), [comments.data]);
   const save = useSaveVersion(team.id, detail.id, (saved) => (setSaveOpen(false), onOpenVersion(saved.number)));
   const action = useCircuitAction(team.id, detail.id, version.number);
   const blocker = useUnsavedChangesGuard(history.dirty && !save.isSuccess);
@@ -105,7 +116,7 @@ export function ConfigurationWorkspace({ team, detail, version, calibration, onO
           panel={
             <div className="hx-stack">
               <div className="hx-workspace">
-                <MeshCanvas definition={draft.content.mesh} configuration={draft.content} {...(gateId ? { selectedGateId: gateId } : {})} onGateClick={setGateId} height={460} ariaLabel={`Mesh of ${detail.name}`} />
+                <MeshCanvas definition={draft.content.mesh} configuration={draft.content} {...(gateId ? { selectedGateId: gateId } : {})} onGateClick={setGateId} highlightGateIds={pinnedGates} highlightLabel="Gate with an open comment" height={460} ariaLabel={`Mesh of ${detail.name}`} />
                 <aside className="hx-side-panel" aria-label="Details">
                   {gateId ? (
                     <>
@@ -132,15 +143,20 @@ export function ConfigurationWorkspace({ team, detail, version, calibration, onO
                   )}
                 </aside>
               </div>
-              <WorkspaceResponse content={draft.content} circuitId={selected} mask={spec?.mask} tunable={canEdit && !!selected && !locked.has(selected)} onTune={(c) => setContent(c, `tune:${selected}`)} />
+              <WorkspaceResponse content={draft.content} circuitId={selected} mask={spec?.mask} bands={commentBands} tunable={canEdit && !!selected && !locked.has(selected)} onTune={(c) => setContent(c, `tune:${selected}`)} />
             </div>
           }
         />
         <Tab id="gates" title="Gates" panel={<GateTable content={draft.content} {...(calibration ? { calibration } : {})} onSelectGate={setGateId} />} />
+        <Tab
+          id="review"
+          title="Review"
+          panel={<ReviewPanel teamId={team.id} configurationId={detail.id} version={version} members={members.data} meLogin={me.data?.user.login ?? ''} role={team.role} {...(gateId ? { selectedGateId: gateId } : {})} onPinGate={setGateId} />}
+        />
         <Tab id="bench" title="Bench" panel={<BenchPanel teamId={team.id} configurationId={detail.id} version={version} chipId={detail.chipId} />} />
         <Tab id="measured" title="Measured" panel={<MeasuredPanel teamId={team.id} configurationId={detail.id} version={version} canUpload={team.role !== 'viewer'} />} />
         <Tab id="yield" title="Yield" panel={<YieldPanel teamId={team.id} configurationId={detail.id} version={version} role={team.role} />} />
-        <Tab id="versions" title={`Versions (${detail.versions.length})`} panel={<VersionsTable versions={detail.versions} current={version.number} onOpen={onOpenVersion} />} />
+        <Tab id="versions" title={`Versions (${detail.versions.length})`} panel={<VersionsPanel teamId={team.id} teamSlug={team.slug} detail={detail} current={version.number} onOpen={onOpenVersion} />} />
       </Tabs>
       {canEdit && (
         <NewCircuitDrawer

@@ -21,10 +21,10 @@ export function YieldJobProgress({ job, mode, onCancel, cancelling = false }: Yi
   const percent = yieldPercent(job);
   return (
     <div className="hx-stack" data-testid="yield-progress">
-      <ProgressBar value={percent / 100} intent="primary" aria-label="Yield study progress" />
+      <ProgressBar value={percent / 100} intent={job.status === 'done' ? 'success' : 'primary'} animate={job.status === 'running'} stripes={job.status === 'running'} aria-label="Yield study progress" />
       <p aria-live="polite" style={{ margin: 0 }}>
-        Running: {job.runsDone.toLocaleString('en-GB')} of {job.runsTotal.toLocaleString('en-GB')} runs ({percent} %)
-        <span className="hx-muted">{mode === 'polling' ? ' · the live stream failed, so the page checks every 2 seconds' : ' · live'}</span>
+        {job.status === 'done' ? 'Done' : 'Running'}: {job.runsDone.toLocaleString('en-GB')} of {job.runsTotal.toLocaleString('en-GB')} runs ({percent} %)
+        {job.status === 'running' && <span className="hx-muted">{mode === 'polling' ? ' · the live stream failed, so the page checks every 2 seconds' : ' · live'}</span>}
       </p>
       {onCancel && <Button icon="stop" intent="danger" variant="outlined" text="Cancel the study" loading={cancelling} onClick={onCancel} style={{ alignSelf: 'flex-start' }} />}
     </div>

@@ -27,6 +27,7 @@ export function YieldJobView({ job, mode, content, request, onCancel, cancelling
         Started by {job.createdBy || 'a teammate'} on {formatDate(job.createdAt)}
       </p>
       {job.status === 'running' && <YieldJobProgress job={job} mode={mode} onCancel={onCancel} cancelling={cancelling ?? false} />}
+      {job.status === 'done' && <YieldJobProgress job={job} mode={mode} />}
       {job.status === 'done' && <YieldResult job={job} content={content} request={request} />}
       {job.status === 'cancelled' && (
         <Callout intent="warning" title="Cancelled">
