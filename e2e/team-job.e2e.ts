@@ -8,6 +8,7 @@ import { join } from 'node:path';
 import { canonicalJson } from '@hexloom/bench';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { addBandPass } from './support/add-band-pass.js';
 import { launchBrowser, SCREENSHOT_DIR } from './support/launch-browser.js';
 import { startServer, type RunningServer } from './support/start-server.js';
 
@@ -46,13 +47,7 @@ describe('a designer and a reviewer take a filter to the bench', () => {
     await designer.getByRole('link', { name: 'Interferer notch' }).click();
     await designer.getByTestId('trace-0').first().waitFor({ timeout: 60_000 });
     workspaceUrl = designer.url().split('?')[0]!;
-    await designer.getByTestId('new-circuit').click();
-    await designer.getByTestId('kind-select').selectOption('coupled-ring-bandpass');
-    await designer.getByTestId('circuit-id').fill('bandpass2');
-    await designer.getByTestId('new-circuit-form').getByLabel(/^Order/).fill('2');
-    await designer.getByTestId('synthesise').click();
-    await designer.getByTestId('proposal').waitFor({ timeout: 90_000 });
-    await designer.getByRole('button', { name: 'Add to workspace' }).click();
+    await addBandPass(designer, 'bandpass2');
     await designer.getByTestId('save-version').click();
     await designer.getByTestId('version-note').fill('band-pass for the downlink next to the notch');
     await designer.getByTestId('confirm-save').click();
