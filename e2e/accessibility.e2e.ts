@@ -72,6 +72,11 @@ describe('every page under axe-core', () => {
       await page.getByRole('tab', { name: /Versions/ }).click();
       await page.getByTestId('version-history').waitFor();
       await check(`workspace-versions-${theme}`);
+      for (const [tab, ready] of [['Review', 'review-panel'], ['Bench', 'total-power'], ['Measured', 'measured-drop-zone'], ['Yield', 'yield-panel']] as const) {
+        await page.getByRole('tab', { name: tab }).click();
+        await page.getByTestId(ready).first().waitFor({ timeout: 60_000 });
+        await check(`workspace-${tab.toLowerCase()}-${theme}`);
+      }
     });
   }
 

@@ -57,8 +57,8 @@ export function BenchDownloads({ teamId, configurationId, version, loaded, ackno
       <h3 id="hx-bench-downloads" className="hx-bench-heading">Downloads</h3>
       {!acknowledged && <p className="hx-bench-note">Tick the box under the cautions to enable the downloads.</p>}
       <ButtonGroup className="hx-bench-buttons">
-        <Button icon="download" text="Download JSON" aria-label={`Download the bench export as JSON (${base}.bench.json)`} disabled={!ready} onClick={saveJson} />
-        <Button icon="th" text="Download CSV" aria-label={`Download the bench export as CSV (${base}.bench.csv)`} disabled={!ready} loading={download.isPending && download.variables.mediaType === 'text/csv'} onClick={saveCsv} />
+        <Button icon="download" text="Download JSON" aria-label={`Download JSON: the bench export as ${base}.bench.json`} disabled={!ready} onClick={saveJson} />
+        <Button icon="th" text="Download CSV" aria-label={`Download CSV: the bench export as ${base}.bench.csv`} disabled={!ready} loading={download.isPending && download.variables.mediaType === 'text/csv'} onClick={saveCsv} />
       </ButtonGroup>
       <h4 className="hx-bench-subheading">Simulated S-parameters</h4>
       {ports.length >= 2 ? (

@@ -31,9 +31,9 @@ describe('BenchPanel', () => {
     mockApi(routes({ body: await signedExport() }));
     const { user } = renderBench();
     expect(await screen.findByText('Follow the laser safety rules of the lab (test caution two).')).toBeTruthy();
-    const json = await screen.findByRole('button', { name: /as JSON/ });
+    const json = await screen.findByRole('button', { name: /^Download JSON/ });
     await waitFor(() => expect(screen.getByRole('table', { name: 'Drive values per phase shifter' })).toBeTruthy());
-    const csv = screen.getByRole('button', { name: /as CSV/ });
+    const csv = screen.getByRole('button', { name: /^Download CSV/ });
     const touchstone = screen.getByRole('button', { name: 'Download Touchstone (.s2p)' });
     for (const b of [json, csv, touchstone]) expect((b as HTMLButtonElement).disabled).toBe(true);
     await user.click(json);

@@ -20,7 +20,7 @@ export function DriveTable({ drives, reportedTotalW }: DriveTableProps) {
   const disagrees = Math.abs(totalW - reportedTotalW) > TOTAL_TOLERANCE * Math.max(1e-3, Math.abs(totalW));
   if (drives.length === 0) return <p className="hx-bench-note">No phase shifter needs a drive: every gate is parked.</p>;
   return (
-    <div className="hx-bench-scroll">
+    <div className="hx-bench-scroll" tabIndex={0} role="region" aria-label="Drive values per phase shifter (scrolls)">
       {disagrees && (
         <Callout intent="danger" icon="error" role="alert" title="The stated total power does not match the rows">
           The export states {formatNumber(reportedTotalW * 1e3)} mW, but its rows add up to {formatNumber(totalW * 1e3)} mW. Do not use this export; export

@@ -16,7 +16,7 @@ export function GateStatesTable({ gates, parkedState }: GateStatesTableProps) {
     <>
       <p className="hx-bench-note">Every gate not listed is parked in {parkedState}.</p>
       {gates.length > 0 && (
-        <div className="hx-bench-scroll">
+        <div className="hx-bench-scroll" tabIndex={0} role="region" aria-label="Gate states (scrolls)">
           <HTMLTable compact striped className="hx-bench-table" aria-label="Gate states">
             <thead>
               <tr>

@@ -29,6 +29,7 @@ export function ChipCard({ chip, teamId, teamSlug }: { chip: Chip; teamId: strin
       {configurations.error && <ApiErrorCallout error={configurations.error} title="Could not load the configurations" />}
       {configurations.data && configurations.data.length === 0 && <p className="hx-muted">No configurations on this chip yet.</p>}
       {configurations.data && configurations.data.length > 0 && (
+        <div className="hx-table-scroll" tabIndex={0} role="region" aria-label={`Configurations of ${chip.name}`}>
         <HTMLTable compact striped className="hx-full-width" data-testid="configurations-table">
           <thead>
             <tr>
@@ -55,6 +56,7 @@ export function ChipCard({ chip, teamId, teamSlug }: { chip: Chip; teamId: strin
             ))}
           </tbody>
         </HTMLTable>
+        </div>
       )}
     </Card>
   );

@@ -79,7 +79,7 @@ export function MeasurementUpload({ teamId, configurationId, version, onUploaded
       )}
       {upload.isSuccess && (
         <Callout intent="success" role="status">
-          Saved {upload.data.fileName}: {upload.data.points} points of {upload.data.from} to {upload.data.to}.
+          Saved {upload.data.fileName}: {upload.data.points} points from {byId(upload.data.from)} to {byId(upload.data.to)}.
         </Callout>
       )}
       <ApiErrorCallout error={upload.error} title="The server refused the measurement" />

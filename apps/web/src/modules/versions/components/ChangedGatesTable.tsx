@@ -15,7 +15,7 @@ export function ChangedGatesTable({ changes, from, to, parkedA, parkedB }: Chang
   if (changes.length === 0) return <p className="hx-muted">No gate is set differently.</p>;
   const shown = all ? changes : changes.slice(0, FIRST);
   return (
-    <div className="hx-diff-gates">
+    <div className="hx-diff-gates" tabIndex={0} role="region" aria-label="Gates changed between the two versions">
       <HTMLTable compact striped className="hx-full-width" aria-label={`Gates changed from v${from} to v${to}`} data-testid="changed-gates">
         <thead>
           <tr>
